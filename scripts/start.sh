@@ -1,0 +1,42 @@
+#!/usr/bin/env bash
+# npm start: installs what is missing, starts the demo PostgreSQL, migrates, seeds, builds, serves.
+set -euo pipefail
+# shellcheck source=scripts/lib.sh
+source "$(dirname -- "${BASH_SOURCE[0]}")/lib.sh"
+
+ensure_system_packages postgresql
+ensure_node_modules
+load_env
+
+export LANDFALL_PG_NAME=${LANDFALL_PG_NAME:-demo}
+export LANDFALL_PG_PORT=${LANDFALL_PG_PORT:-54320}
+export LANDFALL_PG_DB=${LANDFALL_PG_DB:-landfall}
+export PORT=${PORT:-4310}
+export HOST=${HOST:-127.0.0.1}
+export ORIGIN=${ORIGIN:-http://$HOST:$PORT}
+
+say "Starting PostgreSQL ($LANDFALL_PG_NAME cluster, port $LANDFALL_PG_PORT)"
+bash scripts/pg.sh start
+DATABASE_URL=${DATABASE_URL:-$(bash scripts/pg.sh url)}
+export DATABASE_URL
+trap 'bash scripts/pg.sh stop' EXIT
+
+say "Migrating and seeding the demo"
+node_modules/.bin/tsx scripts/migrate.ts
+node_modules/.bin/tsx scripts/seed.ts
+ensure_build
+
+cat >&2 <<MSG
+
+  Landfall is starting at $ORIGIN
+  Demo sign-ins (password for all: Landfall-demo-2026):
+    admin@solvrae.example        administrator
+    coordinator@solvrae.example  logistics coordinator
+    finance@solvrae.example      finance
+    broker@kaaiman.example       customs broker
+    buyer@hallvik.example        customer (Hallvik Heimtechnik, DE)
+    buyer@wattlebird.example     customer (Wattlebird Home Retail, AU)
+  Press Ctrl-C to stop the app and its database.
+
+MSG
+node build

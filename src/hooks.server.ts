@@ -1,0 +1,72 @@
+import { json, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
+import { authHandle } from '$lib/server/auth';
+import { isApiPath, requireUser } from '$lib/server/auth/guard';
+import { loadSessionUser } from '$lib/server/auth/session-user';
+import { db } from '$lib/server/db';
+
+/** Pages and endpoints anyone may reach. Everything else needs a session. */
+const PUBLIC_PATHS = new Set(['/signin', '/api/health']);
+
+export const init: ServerInit = async () => {
+	// Fail at start-up, not on the first request, when the database is unreachable or misconfigured.
+	await db().authenticate();
+};
+
+// Auth.js's own HTTP endpoints stay closed: sign-in goes through our form action only.
+const closeAuthEndpoints: Handle = ({ event, resolve }) =>
+	event.url.pathname === '/auth' || event.url.pathname.startsWith('/auth/')
+		? new Response('Not found', { status: 404 })
+		: resolve(event);
+
+const loadUser: Handle = async ({ event, resolve }) => {
+	event.locals.user = null;
+	const session = await event.locals.auth();
+	if (session?.user?.id) event.locals.user = await loadSessionUser(session.user.id);
+	return resolve(event);
+};
+
+// Whole-area checks; every load, action and endpoint checks its role again where the data is.
+const guardAreas: Handle = ({ event, resolve }) => {
+	const { pathname } = event.url;
+	if (PUBLIC_PATHS.has(pathname)) return resolve(event);
+	const user = event.locals.user;
+	if (!user && isApiPath(pathname)) {
+		return json(
+			{ message: 'Sign in first: this request has no valid session.', code: 'unauthenticated' },
+			{ status: 401 }
+		);
+	}
+	requireUser(event); // pages: redirect to sign-in
+	const adminArea = pathname === '/admin' || pathname.startsWith('/admin/');
+	// GETs reach the area's load, which renders the 403 page; anything else stops here.
+	if (adminArea && user?.role !== 'admin' && event.request.method !== 'GET') {
+		return json({ message: 'This is for administrators only.', code: 'forbidden' }, { status: 403 });
+	}
+	return resolve(event);
+};
+
+const securityHeaders: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	response.headers.set('X-Content-Type-Options', 'nosniff');
+	response.headers.set('Referrer-Policy', 'same-origin');
+	response.headers.set('X-Frame-Options', 'DENY');
+	response.headers.set('Permissions-Policy', 'camera=(), microphone=(), geolocation=()');
+	if (isApiPath(event.url.pathname) || event.locals.user) {
+		response.headers.set('Cache-Control', 'no-store');
+	}
+	return response;
+};
+
+export const handle = sequence(closeAuthEndpoints, authHandle, loadUser, securityHeaders, guardAreas);
+
+export const handleError: HandleServerError = ({ error, event, status, message }) => {
+	if (status === 404) return { message: 'Not found' };
+	const id = crypto.randomUUID();
+	try {
+		console.error(`[error ${id}] ${event.request.method} ${event.url.pathname}`, error);
+	} catch {
+		// logging must never turn one error into two
+	}
+	return { message: status >= 500 ? 'Something went wrong on our side.' : message, id };
+};

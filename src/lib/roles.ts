@@ -1,0 +1,69 @@
+// Roles, organization kinds and the navigation each role sees. Shared by server and pages;
+// holds no secrets and no data access.
+
+export const ROLES = ['admin', 'coordinator', 'broker', 'finance', 'customer'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ORGANIZATION_KINDS = ['exporter', 'customer', 'broker', 'forwarder'] as const;
+export type OrganizationKind = (typeof ORGANIZATION_KINDS)[number];
+
+/** Roles of the exporter's own staff: they see every organization's rows. */
+export const STAFF_ROLES = ['admin', 'coordinator', 'finance'] as const satisfies readonly Role[];
+
+export const ROLE_LABELS: Record<Role, string> = {
+	admin: 'Administrator',
+	coordinator: 'Logistics coordinator',
+	broker: 'Customs broker',
+	finance: 'Finance',
+	customer: 'Customer'
+};
+
+export const ORGANIZATION_KIND_LABELS: Record<OrganizationKind, string> = {
+	exporter: 'Exporter',
+	customer: 'Customer',
+	broker: 'Customs broker',
+	forwarder: 'Forwarder'
+};
+
+/** The kind of organization a user of each role must belong to. */
+export const ROLE_ORGANIZATION_KIND: Record<Role, OrganizationKind> = {
+	admin: 'exporter',
+	coordinator: 'exporter',
+	finance: 'exporter',
+	broker: 'broker',
+	customer: 'customer'
+};
+
+export function isRole(value: unknown): value is Role {
+	return typeof value === 'string' && (ROLES as readonly string[]).includes(value);
+}
+
+export function isStaff(role: Role): boolean {
+	return (STAFF_ROLES as readonly Role[]).includes(role);
+}
+
+export interface NavItem {
+	href: string;
+	label: string;
+}
+
+/** The navigation a role sees; later features add their entries here. */
+export function navigationFor(role: Role, organizationId: string): NavItem[] {
+	const overview = { href: '/', label: 'Overview' };
+	switch (role) {
+		case 'admin':
+			return [
+				overview,
+				{ href: '/organizations', label: 'Organizations' },
+				{ href: '/admin/users', label: 'People & access' },
+				{ href: '/admin/audit', label: 'Audit trail' }
+			];
+		case 'coordinator':
+		case 'finance':
+			return [overview, { href: '/organizations', label: 'Organizations' }];
+		case 'broker':
+			return [overview, { href: `/organizations/${organizationId}`, label: 'Our firm' }];
+		case 'customer':
+			return [overview, { href: `/organizations/${organizationId}`, label: 'Our company' }];
+	}
+}

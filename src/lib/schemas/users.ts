@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { ROLES } from '../roles';
+
+// Shared by the admin forms (superforms) and the /api/v1/users endpoints.
+export const PASSWORD_RULE = 'At least 12 and at most 128 characters.';
+
+const name = z
+	.string()
+	.trim()
+	.min(1, 'Enter the person’s name.')
+	.max(120, 'Keep the name under 120 characters.');
+const role = z.enum(ROLES, { error: 'Choose one of the roles.' });
+
+export const createUserSchema = z.object({
+	name,
+	email: z
+		.email({ error: 'Enter an e-mail address such as name@company.example.' })
+		.trim()
+		.max(254, 'That address is too long.'),
+	role,
+	organizationId: z.uuid({ error: 'Choose the organization this person belongs to.' }),
+	password: z
+		.string()
+		.min(12, `Password too short: ${PASSWORD_RULE}`)
+		.max(128, `Password too long: ${PASSWORD_RULE}`)
+});
+export type CreateUserInput = z.infer<typeof createUserSchema>;
+
+export const updateUserSchema = z.object({
+	name,
+	role,
+	disabled: z.boolean().default(false),
+	/** The version the editor saw; a mismatch means someone else saved first. */
+	version: z.number().int().min(0)
+});
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;

@@ -1,0 +1,42 @@
+import { fail } from '@sveltejs/kit';
+import { message, setError, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guard';
+import { listOrganizations } from '$lib/server/services/organizations';
+import { createUser, listUsers } from '$lib/server/services/users';
+import { createUserSchema } from '$lib/schemas/users';
+import type { Actions, PageServerLoad } from './$types';
+
+// Returns: users (everyone with a sign-in), organizations (to choose from), form (add a person).
+export const load: PageServerLoad = async (event) => {
+	const admin = requireRole(event, 'admin');
+	const [users, organizations, form] = await Promise.all([
+		listUsers(),
+		listOrganizations(admin),
+		superValidate(zod4(createUserSchema))
+	]);
+	return { users, organizations, form };
+};
+
+export const actions: Actions = {
+	create: async (event) => {
+		const admin = requireRole(event, 'admin');
+		const form = await superValidate(event.request, zod4(createUserSchema));
+		if (!form.valid) {
+			form.data.password = '';
+			return fail(400, { form });
+		}
+		const result = await createUser(admin, form.data, event.getClientAddress());
+		form.data.password = '';
+		if (!result.ok) {
+			for (const [field, text] of Object.entries(result.fieldErrors)) {
+				setError(form, field as 'email', text);
+			}
+			return message(form, { tone: 'error', text: result.message }, { status: result.status });
+		}
+		return message(form, {
+			tone: 'ok',
+			text: `${result.value.name} can now sign in as ${result.value.email}.`
+		});
+	}
+};

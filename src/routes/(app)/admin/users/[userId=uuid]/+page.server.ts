@@ -1,0 +1,37 @@
+import { error, fail } from '@sveltejs/kit';
+import { message, setError, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guard';
+import { getUser, updateUser } from '$lib/server/services/users';
+import { updateUserSchema } from '$lib/schemas/users';
+import type { Actions, PageServerLoad } from './$types';
+
+// Returns: person (the user being edited), form (name, role, disabled, version).
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, 'admin');
+	const person = await getUser(event.params.userId);
+	if (!person) error(404, { message: 'No such person.' });
+	const form = await superValidate(
+		{ name: person.name, role: person.role, disabled: person.disabled, version: person.version },
+		zod4(updateUserSchema)
+	);
+	return { person, form };
+};
+
+export const actions: Actions = {
+	save: async (event) => {
+		const admin = requireRole(event, 'admin');
+		const form = await superValidate(event.request, zod4(updateUserSchema));
+		if (!form.valid) return fail(400, { form });
+		const result = await updateUser(admin, event.params.userId, form.data, event.getClientAddress());
+		if (!result.ok) {
+			if (result.status === 404) error(404, { message: 'No such person.' });
+			for (const [field, text] of Object.entries(result.fieldErrors)) {
+				setError(form, field as 'role', text);
+			}
+			return message(form, { tone: 'error', text: result.message }, { status: result.status });
+		}
+		form.data.version = result.value.version;
+		return message(form, { tone: 'ok', text: 'Saved.' });
+	}
+};
