@@ -9,13 +9,17 @@ const migrator = createMigrator(sequelize);
 try {
 	if (command === 'up') {
 		const applied = await migrator.up();
-		console.error(`[migrate] ${applied.length ? applied.map((m) => m.name).join(', ') : 'schema up to date'}`);
+		console.error(
+			`[migrate] ${applied.length ? applied.map((m) => m.name).join(', ') : 'schema up to date'}`
+		);
 	} else if (command === 'down') {
 		const reverted = await migrator.down();
 		console.error(`[migrate] reverted ${reverted.map((m) => m.name).join(', ') || 'nothing'}`);
 	} else if (command === 'status') {
 		const pending = await migrator.pending();
-		console.log(pending.length ? `pending: ${pending.map((m) => m.name).join(', ')}` : 'up to date');
+		console.log(
+			pending.length ? `pending: ${pending.map((m) => m.name).join(', ')}` : 'up to date'
+		);
 	} else {
 		throw new Error(`Unknown command ${command}: use up, down or status`);
 	}

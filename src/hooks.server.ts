@@ -41,7 +41,10 @@ const guardAreas: Handle = ({ event, resolve }) => {
 	const adminArea = pathname === '/admin' || pathname.startsWith('/admin/');
 	// GETs reach the area's load, which renders the 403 page; anything else stops here.
 	if (adminArea && user?.role !== 'admin' && event.request.method !== 'GET') {
-		return json({ message: 'This is for administrators only.', code: 'forbidden' }, { status: 403 });
+		return json(
+			{ message: 'This is for administrators only.', code: 'forbidden' },
+			{ status: 403 }
+		);
 	}
 	return resolve(event);
 };
@@ -58,7 +61,13 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(closeAuthEndpoints, authHandle, loadUser, securityHeaders, guardAreas);
+export const handle = sequence(
+	closeAuthEndpoints,
+	authHandle,
+	loadUser,
+	securityHeaders,
+	guardAreas
+);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (status === 404) return { message: 'Not found' };

@@ -3,7 +3,10 @@ import type { z } from 'zod';
 import type { ServiceResult } from './services/users';
 
 /** Parses a JSON body against a schema; anything else is a 400 naming each bad field's path. */
-export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+export async function readJson<S extends z.ZodType>(
+	request: Request,
+	schema: S
+): Promise<z.infer<S>> {
 	let body: unknown;
 	try {
 		body = await request.json();

@@ -6,7 +6,13 @@ describe('safeRedirectPath', () => {
 		expect(safeRedirectPath('/organizations?x=1')).toBe('/organizations?x=1');
 	});
 	it('refuses other hosts and tricks that browsers treat as other hosts', () => {
-		for (const bad of ['https://evil.example/', '//evil.example', '/\\evil.example', 'javascript:alert(1)', '']) {
+		for (const bad of [
+			'https://evil.example/',
+			'//evil.example',
+			'/\\evil.example',
+			'javascript:alert(1)',
+			''
+		]) {
 			expect(safeRedirectPath(bad)).toBe('/');
 		}
 	});

@@ -13,7 +13,10 @@ export function requireUser(event: GuardEvent): SessionUser {
 	const user = event.locals.user;
 	if (user) return user;
 	if (isApiPath(event.url.pathname)) {
-		error(401, { message: 'Sign in first: this request has no valid session.', code: 'unauthenticated' });
+		error(401, {
+			message: 'Sign in first: this request has no valid session.',
+			code: 'unauthenticated'
+		});
 	}
 	const back = event.url.pathname + event.url.search;
 	redirect(303, `/signin?redirectTo=${encodeURIComponent(back)}`);

@@ -17,7 +17,11 @@ export class SignInRefused extends CredentialsSignin {
 
 export const SESSION_MAX_AGE_SECONDS = 8 * 60 * 60;
 
-export const { handle: authHandle, signIn, signOut } = SvelteKitAuth(async (): Promise<SvelteKitAuthConfig> => {
+export const {
+	handle: authHandle,
+	signIn,
+	signOut
+} = SvelteKitAuth(async (): Promise<SvelteKitAuthConfig> => {
 	if (!env.AUTH_SECRET) throw new Error('AUTH_SECRET is not set: see .env.example');
 	return {
 		secret: env.AUTH_SECRET,

@@ -34,7 +34,10 @@ function stateFrom(failures: Date[], limit: number, now: Date): ThrottleState {
 	// Refused until the oldest of the counted failures leaves the window.
 	const oldest = failures[limit - 1] as Date;
 	const until = oldest.getTime() + THROTTLE.windowMinutes * 60_000;
-	return { throttled: true, retryAfterSeconds: Math.max(1, Math.ceil((until - now.getTime()) / 1000)) };
+	return {
+		throttled: true,
+		retryAfterSeconds: Math.max(1, Math.ceil((until - now.getTime()) / 1000))
+	};
 }
 
 export async function throttleState(email: string, ip: string | null): Promise<ThrottleState> {

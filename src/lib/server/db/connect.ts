@@ -3,7 +3,10 @@ import { Sequelize } from 'sequelize';
 import { initModels } from './models';
 
 // Framework-free so that scripts (migrate, seed) and tests can open a connection too.
-export function createSequelize(databaseUrl: string, options: { poolMax?: number } = {}): Sequelize {
+export function createSequelize(
+	databaseUrl: string,
+	options: { poolMax?: number } = {}
+): Sequelize {
 	const sequelize = new Sequelize(databaseUrl, {
 		dialect: 'postgres',
 		dialectModule: pg,

@@ -1,3 +1,4 @@
+import { Op } from 'sequelize';
 import type { SessionUser } from '../auth/session-user';
 import { organizationScope } from '../auth/guard';
 import { Organization, OrganizationAddress, OrganizationTaxId } from '../db/models';
@@ -43,7 +44,8 @@ export async function getOrganization(
 ): Promise<OrganizationDetail | null> {
 	const organization = await Organization.findOne({
 		attributes: [...summaryAttributes],
-		where: { id, ...organizationScope(user, 'id') },
+		// Op.and, not a spread: the scope's `id` must not overwrite the requested one.
+		where: { [Op.and]: [{ id }, organizationScope(user, 'id')] },
 		include: [
 			{ model: OrganizationAddress, as: 'addresses' },
 			{ model: OrganizationTaxId, as: 'taxIds' }

@@ -21,7 +21,10 @@ export const actions: Actions = {
 		});
 		const request = new Request(event.url, {
 			method: 'POST',
-			headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: event.request.headers.get('cookie') ?? '' },
+			headers: {
+				'content-type': 'application/x-www-form-urlencoded',
+				cookie: event.request.headers.get('cookie') ?? ''
+			},
 			body: new URLSearchParams({ redirectTo: '/signin' })
 		});
 		try {

@@ -23,7 +23,12 @@ export const actions: Actions = {
 		const admin = requireRole(event, 'admin');
 		const form = await superValidate(event.request, zod4(updateUserSchema));
 		if (!form.valid) return fail(400, { form });
-		const result = await updateUser(admin, event.params.userId, form.data, event.getClientAddress());
+		const result = await updateUser(
+			admin,
+			event.params.userId,
+			form.data,
+			event.getClientAddress()
+		);
 		if (!result.ok) {
 			if (result.status === 404) error(404, { message: 'No such person.' });
 			for (const [field, text] of Object.entries(result.fieldErrors)) {

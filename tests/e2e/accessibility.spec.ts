@@ -1,0 +1,51 @@
+import AxeBuilder from '@axe-core/playwright';
+import { expect, test, type Page } from '@playwright/test';
+import { DEMO, signInPage } from './helpers';
+
+// Every page passes axe (WCAG 2.1 A/AA rules) with no serious or critical violation.
+async function expectAccessible(page: Page, label: string) {
+	const results = await new AxeBuilder({ page })
+		.withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'])
+		.analyze();
+	const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+	expect(
+		bad.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`),
+		label
+	).toEqual([]);
+}
+
+test('sign-in page, also with errors shown', async ({ page }) => {
+	await page.goto('/signin');
+	await expectAccessible(page, '/signin');
+	await page.getByRole('button', { name: 'Sign in' }).click();
+	await expect(page.getByText('Enter your password.')).toBeVisible();
+	await expectAccessible(page, '/signin with field errors');
+});
+
+test('every page an administrator sees', async ({ page }) => {
+	test.setTimeout(120_000);
+	await signInPage(page, DEMO.admin);
+	await expect(page).toHaveURL('/');
+	for (const path of ['/', '/organizations', '/admin/users', '/admin/audit', '/signout']) {
+		await page.goto(path);
+		await expectAccessible(page, path);
+	}
+	await page.goto('/organizations');
+	await page.getByRole('link', { name: 'Hallvik Heimtechnik GmbH' }).click();
+	await expectAccessible(page, 'organization detail');
+	await page.goto('/admin/users');
+	await page.getByRole('link', { name: 'Daniel Tan Wei Jie' }).click();
+	await expectAccessible(page, 'person detail');
+	await page.goto('/no-such-page');
+	await expectAccessible(page, '404 page');
+});
+
+test('the pages a customer sees, and the 403 page', async ({ page }) => {
+	await signInPage(page, DEMO.customer);
+	await expect(page).toHaveURL('/');
+	await expectAccessible(page, 'customer overview');
+	await page.getByRole('link', { name: 'Our company' }).click();
+	await expectAccessible(page, 'customer organization');
+	await page.goto('/organizations');
+	await expectAccessible(page, '403 page');
+});

@@ -1,0 +1,35 @@
+import { expect, request, type APIRequestContext, type Page } from '@playwright/test';
+import type { Role } from '../../src/lib/roles';
+
+export const DEMO_PASSWORD = 'Landfall-demo-2026';
+
+/** One demo user per role (seeders/demo-scenario.ts), plus a second customer organization. */
+export const DEMO: Record<Role | 'otherCustomer', string> = {
+	admin: 'admin@solvrae.example',
+	coordinator: 'coordinator@solvrae.example',
+	finance: 'finance@solvrae.example',
+	broker: 'broker@kaaiman.example',
+	customer: 'buyer@hallvik.example',
+	otherCustomer: 'buyer@wattlebird.example'
+};
+
+export async function signInPage(page: Page, email: string, password = DEMO_PASSWORD) {
+	await page.goto('/signin');
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByLabel('Password').fill(password);
+	await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** An API client holding the session cookie of the given user (or none when email is null). */
+export async function apiAs(baseURL: string, email: string | null): Promise<APIRequestContext> {
+	const context = await request.newContext({ baseURL, extraHTTPHeaders: { origin: baseURL } });
+	if (email) {
+		const response = await context.post('/signin', {
+			form: { email, password: DEMO_PASSWORD },
+			headers: { accept: 'application/json' }
+		});
+		expect(response.status(), `sign-in of ${email}`).toBe(200);
+		expect(await response.json()).toMatchObject({ type: 'redirect' });
+	}
+	return context;
+}

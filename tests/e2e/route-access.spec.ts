@@ -1,0 +1,233 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { expect, test, type APIRequestContext } from '@playwright/test';
+import { DEMO, apiAs } from './helpers';
+
+// Every page, form action and API route, tried as anonymous, each role and a customer of another
+// organization. The routes are read from src/routes, so a new route without an entry here fails.
+
+type Who = 'anonymous' | 'admin' | 'coordinator' | 'finance' | 'broker' | 'customer';
+const WHO: Who[] = ['anonymous', 'admin', 'coordinator', 'finance', 'broker', 'customer'];
+type Expect = Partial<Record<Who, number>> & { default: number };
+
+const SIGNED_IN_200: Expect = { anonymous: 303, default: 200 };
+const STAFF_PAGE: Expect = { anonymous: 303, broker: 403, customer: 403, default: 200 };
+const ADMIN_PAGE: Expect = { anonymous: 303, admin: 200, default: 403 };
+const ADMIN_API: Expect = { anonymous: 401, admin: 200, default: 403 };
+const API_200: Expect = { anonymous: 401, default: 200 };
+/** Own organization: everyone signed in; customer and broker only see their own. */
+const OWN_ORG_PAGE: Expect = { anonymous: 303, default: 200 };
+/** Another customer's organization: invisible (404) to customers and brokers. */
+const OTHER_ORG_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
+const OTHER_ORG_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
+
+interface Probe {
+	method: 'GET' | 'POST' | 'PATCH';
+	/** Path with placeholders :own (the user's organization), :other (another customer), :user. */
+	path: string;
+	expect: Expect;
+	body?: Record<string, unknown>;
+	form?: Record<string, string>;
+}
+
+/** Route id (as in src/routes, groups removed) → the probes that cover it. */
+const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] }> = {
+	'/': { page: [{ method: 'GET', path: '/', expect: SIGNED_IN_200 }] },
+	'/signin': {
+		page: [{ method: 'GET', path: '/signin', expect: { anonymous: 200, default: 303 } }],
+		actions: [] // covered by sign-in.spec.ts
+	},
+	'/signout': {
+		page: [{ method: 'GET', path: '/signout', expect: SIGNED_IN_200 }],
+		actions: [] // covered by sign-in.spec.ts
+	},
+	'/organizations': { page: [{ method: 'GET', path: '/organizations', expect: STAFF_PAGE }] },
+	'/organizations/[organizationId=uuid]': {
+		page: [
+			{ method: 'GET', path: '/organizations/:own', expect: OWN_ORG_PAGE },
+			{ method: 'GET', path: '/organizations/:other', expect: OTHER_ORG_PAGE }
+		]
+	},
+	'/admin/users': {
+		page: [{ method: 'GET', path: '/admin/users', expect: ADMIN_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/admin/users?/create',
+				form: { name: '' },
+				// admin: 400 (the empty form is rejected field by field); others never reach the action
+				expect: { anonymous: 303, admin: 400, default: 403 }
+			}
+		]
+	},
+	'/admin/users/[userId=uuid]': {
+		page: [{ method: 'GET', path: '/admin/users/:user', expect: ADMIN_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/admin/users/:user?/save',
+				form: { name: '' },
+				expect: { anonymous: 303, admin: 400, default: 403 }
+			}
+		]
+	},
+	'/admin/audit': { page: [{ method: 'GET', path: '/admin/audit', expect: ADMIN_PAGE }] },
+	'/api/health': { api: [{ method: 'GET', path: '/api/health', expect: { default: 200 } }] },
+	'/api/v1/me': { api: [{ method: 'GET', path: '/api/v1/me', expect: API_200 }] },
+	'/api/v1/organizations': {
+		api: [{ method: 'GET', path: '/api/v1/organizations', expect: API_200 }]
+	},
+	'/api/v1/organizations/[organizationId=uuid]': {
+		api: [
+			{ method: 'GET', path: '/api/v1/organizations/:own', expect: API_200 },
+			{ method: 'GET', path: '/api/v1/organizations/:other', expect: OTHER_ORG_API }
+		]
+	},
+	'/api/v1/users': {
+		api: [
+			{ method: 'GET', path: '/api/v1/users', expect: ADMIN_API },
+			{
+				method: 'POST',
+				path: '/api/v1/users',
+				body: {},
+				expect: { anonymous: 401, admin: 400, default: 403 }
+			}
+		]
+	},
+	'/api/v1/users/[userId=uuid]': {
+		api: [
+			{ method: 'GET', path: '/api/v1/users/:user', expect: ADMIN_API },
+			{
+				method: 'PATCH',
+				path: '/api/v1/users/:user',
+				body: {},
+				expect: { anonymous: 401, admin: 400, default: 403 }
+			}
+		]
+	},
+	'/api/v1/audit-events': {
+		api: [{ method: 'GET', path: '/api/v1/audit-events', expect: ADMIN_API }]
+	}
+};
+
+interface FoundRoute {
+	id: string;
+	page: boolean;
+	actions: boolean;
+	methods: string[];
+}
+
+function findRoutes(dir = 'src/routes', prefix = ''): FoundRoute[] {
+	const entries = readdirSync(dir, { withFileTypes: true });
+	const files = entries.filter((e) => e.isFile()).map((e) => e.name);
+	const found: FoundRoute[] = [];
+	const server = files.includes('+page.server.ts')
+		? readFileSync(path.join(dir, '+page.server.ts'), 'utf8')
+		: '';
+	const endpoint = files.includes('+server.ts')
+		? readFileSync(path.join(dir, '+server.ts'), 'utf8')
+		: '';
+	if (files.includes('+page.svelte') || endpoint) {
+		found.push({
+			id: prefix || '/',
+			page: files.includes('+page.svelte'),
+			actions: /export const actions/.test(server),
+			methods: [...endpoint.matchAll(/export const (GET|POST|PUT|PATCH|DELETE)\b/g)].map(
+				(m) => m[1]!
+			)
+		});
+	}
+	for (const entry of entries.filter((e) => e.isDirectory())) {
+		const segment = /^\(.+\)$/.test(entry.name) ? '' : `/${entry.name}`;
+		found.push(...findRoutes(path.join(dir, entry.name), prefix + segment));
+	}
+	return found;
+}
+
+test('every route in src/routes has access probes', () => {
+	for (const route of findRoutes()) {
+		const entry = ROUTES[route.id];
+		expect(entry, `route ${route.id} has no entry in ROUTES`).toBeDefined();
+		if (route.page) expect(entry?.page?.length, `${route.id}: page probes`).toBeGreaterThan(0);
+		if (route.actions) expect(entry?.actions, `${route.id}: action probes`).toBeDefined();
+		for (const method of route.methods) {
+			expect(
+				entry?.api?.some((p) => p.method === method),
+				`${route.id}: ${method} probe`
+			).toBe(true);
+		}
+	}
+});
+
+test.describe('access per role', () => {
+	const clients = new Map<Who, APIRequestContext>();
+	const ids = { own: new Map<Who, string>(), other: '', user: '' };
+
+	test.beforeAll(async ({ baseURL }) => {
+		for (const who of WHO) {
+			clients.set(who, await apiAs(baseURL!, who === 'anonymous' ? null : DEMO[who]));
+		}
+		const admin = clients.get('admin')!;
+		const { organizations } = (await (await admin.get('/api/v1/organizations')).json()) as {
+			organizations: { id: string; name: string }[];
+		};
+		const { users } = (await (await admin.get('/api/v1/users')).json()) as {
+			users: { id: string; email: string; organizationId: string }[];
+		};
+		for (const who of WHO) {
+			if (who === 'anonymous') continue;
+			ids.own.set(who, users.find((u) => u.email === DEMO[who])!.organizationId);
+		}
+		ids.own.set('anonymous', ids.own.get('customer')!);
+		// The other customer's organization: Wattlebird, never Hallvik's own.
+		ids.other = users.find((u) => u.email === DEMO.otherCustomer)!.organizationId;
+		ids.user = users.find((u) => u.email === DEMO.coordinator)!.id;
+		expect(organizations.length).toBeGreaterThan(3);
+	});
+
+	test.afterAll(async () => {
+		for (const client of clients.values()) await client.dispose();
+	});
+
+	const probes = Object.entries(ROUTES).flatMap(([id, entry]) =>
+		[...(entry.page ?? []), ...(entry.actions ?? []), ...(entry.api ?? [])].map((p) => ({
+			id,
+			...p
+		}))
+	);
+
+	for (const who of WHO) {
+		test(`as ${who}`, async () => {
+			const client = clients.get(who)!;
+			for (const probe of probes) {
+				const url = probe.path
+					.replace(':own', ids.own.get(who)!)
+					.replace(':other', ids.other)
+					.replace(':user', ids.user);
+				const response = await client.fetch(url, {
+					method: probe.method,
+					maxRedirects: 0,
+					...(probe.body ? { data: probe.body } : {}),
+					...(probe.form ? { form: probe.form, headers: { accept: 'text/html' } } : {})
+				});
+				const wanted = probe.expect[who] ?? probe.expect.default;
+				expect(response.status(), `${who} ${probe.method} ${url}`).toBe(wanted);
+				if (response.status() === 303 && who === 'anonymous') {
+					expect(response.headers()['location']).toMatch(/^\/signin\?redirectTo=/);
+				}
+				if (url.startsWith('/api/') && wanted >= 400) {
+					const body = (await response.json()) as { message?: string };
+					expect(body.message, `${url} explains the refusal`).toBeTruthy();
+				}
+			}
+		});
+	}
+
+	test('customers and brokers list only their own organization through the API', async () => {
+		for (const who of ['customer', 'broker'] as const) {
+			const response = await clients.get(who)!.get('/api/v1/organizations');
+			const { organizations } = (await response.json()) as { organizations: { id: string }[] };
+			expect(organizations.map((o) => o.id)).toEqual([ids.own.get(who)]);
+		}
+	});
+});
