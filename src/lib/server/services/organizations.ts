@@ -51,7 +51,7 @@ export async function getOrganization(
 			{ model: OrganizationTaxId, as: 'taxIds' }
 		],
 		order: [
-			[{ model: OrganizationAddress, as: 'addresses' }, 'purpose', 'ASC'],
+			[{ model: OrganizationAddress, as: 'addresses' }, 'createdAt', 'ASC'],
 			[{ model: OrganizationTaxId, as: 'taxIds' }, 'type', 'ASC']
 		]
 	});
@@ -65,7 +65,7 @@ export async function getOrganization(
 		name: plain.name,
 		kind: plain.kind,
 		countryCode: plain.countryCode,
-		addresses: plain.addresses.map((a) => ({
+		addresses: [...plain.addresses].sort(byPurpose).map((a) => ({
 			id: a.id,
 			purpose: a.purpose,
 			label: a.label,
@@ -83,4 +83,10 @@ export async function getOrganization(
 			countryCode: t.countryCode
 		}))
 	};
+}
+
+// Registered address first, then the others in a fixed order.
+const PURPOSE_ORDER = ['registered', 'office', 'billing', 'delivery', 'factory'];
+function byPurpose(a: { purpose: string }, b: { purpose: string }): number {
+	return PURPOSE_ORDER.indexOf(a.purpose) - PURPOSE_ORDER.indexOf(b.purpose);
 }
