@@ -101,6 +101,10 @@ describe('authenticate: answers', () => {
 });
 
 describe('authenticate: throttling', () => {
+	it('uses the agreed limits: 5 per e-mail address, 30 per client address, in 15 minutes', () => {
+		expect(THROTTLE).toEqual({ windowMinutes: 15, maxFailuresPerEmail: 5, maxFailuresPerIp: 30 });
+	});
+
 	it(`refuses an address after ${THROTTLE.maxFailuresPerEmail} failures, even with the right password`, async () => {
 		const user = await createOwnUser();
 		const ip = await freshIp();
