@@ -13,11 +13,18 @@ export const DEMO: Record<Role | 'otherCustomer', string> = {
 	otherCustomer: 'buyer@wattlebird.example'
 };
 
-export async function signInPage(page: Page, email: string, password = DEMO_PASSWORD) {
+/** Fills and submits the sign-in form (the outcome is the caller's to check). */
+export async function submitSignIn(page: Page, email: string, password = DEMO_PASSWORD) {
 	await page.goto('/signin');
 	await page.getByLabel('E-mail').fill(email);
 	await page.getByLabel('Password').fill(password);
 	await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Signs in with the demo password and waits until the app has left the sign-in page. */
+export async function signInPage(page: Page, email: string) {
+	await submitSignIn(page, email);
+	await expect(page).toHaveURL((url) => !url.pathname.startsWith('/signin'));
 }
 
 /** An API client holding the session cookie of the given user (or none when email is null). */

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, signInPage, submitSignIn } from './helpers';
 
 const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 	admin: ['Overview', 'Organizations', 'People & access', 'Audit trail'],
@@ -39,9 +39,9 @@ test('after sign-in the user lands where they were going', async ({ page }) => {
 });
 
 test('unknown e-mail and wrong password get the very same message', async ({ page }) => {
-	await signInPage(page, 'nobody-here@solvrae.example', 'whatever-password');
+	await submitSignIn(page, 'nobody-here@solvrae.example', 'whatever-password');
 	const unknown = await page.getByRole('alert').textContent();
-	await signInPage(page, DEMO.finance, 'not-the-password');
+	await submitSignIn(page, DEMO.finance, 'not-the-password');
 	const wrong = await page.getByRole('alert').textContent();
 	expect(unknown?.trim()).toBe(wrong?.trim());
 	expect(wrong).toContain('do not match an active Landfall account');
@@ -51,7 +51,7 @@ test('unknown e-mail and wrong password get the very same message', async ({ pag
 });
 
 test('a disabled account cannot sign in', async ({ page }) => {
-	await signInPage(page, 'former.planner@solvrae.example');
+	await submitSignIn(page, 'former.planner@solvrae.example');
 	await expect(page.getByRole('alert')).toContainText('do not match an active Landfall account');
 	await expect(page).toHaveURL(/\/signin/);
 });
@@ -59,10 +59,10 @@ test('a disabled account cannot sign in', async ({ page }) => {
 test('repeated failures for one address are throttled', async ({ page }) => {
 	const email = `throttle-${Date.now()}@solvrae.example`;
 	for (let i = 0; i < 5; i++) {
-		await signInPage(page, email, `wrong-${i}`);
+		await submitSignIn(page, email, `wrong-${i}`);
 		await expect(page.getByRole('alert')).toContainText('do not match');
 	}
-	await signInPage(page, email, 'wrong-again');
+	await submitSignIn(page, email, 'wrong-again');
 	await expect(page.getByRole('alert')).toContainText('Too many failed sign-ins');
 });
 

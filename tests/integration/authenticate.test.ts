@@ -213,6 +213,8 @@ describe('authenticate: what it records', () => {
 		expect(after.lastSignInAt).toBeInstanceOf(Date);
 		expect(after.lastSignInAt!.getTime()).toBeGreaterThanOrEqual(started - 1000);
 		expect(after.lastSignInAt!.getTime()).toBeLessThanOrEqual(Date.now() + 1000);
+		// A sign-in is not an edit: the optimistic-lock version stays, so an open admin form is not stale.
+		expect(after.version).toBe(before.version);
 
 		const events = await AuditEvent.findAll({
 			where: { action: 'auth.sign_in', entityId: user.id },

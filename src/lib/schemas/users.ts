@@ -13,10 +13,12 @@ const role = z.enum(ROLES, { error: 'Choose one of the roles.' });
 
 export const createUserSchema = z.object({
 	name,
+	// Trim first, then check the format (z.email().trim() would check before trimming).
 	email: z
-		.email({ error: 'Enter an e-mail address such as name@company.example.' })
+		.string()
 		.trim()
-		.max(254, 'That address is too long.'),
+		.max(254, 'That address is too long.')
+		.pipe(z.email({ error: 'Enter an e-mail address such as name@company.example.' })),
 	role,
 	organizationId: z.uuid({ error: 'Choose the organization this person belongs to.' }),
 	password: z

@@ -38,7 +38,9 @@ export async function authenticate(input: {
 	await recordAttempt({ email, ip: input.ip, succeeded: valid });
 	if (!valid || !user) return { ok: false, reason: 'invalid' };
 
-	await user.update({ lastSignInAt: new Date() }, { silent: true });
+	// Static update: it leaves the optimistic-lock version alone, so a sign-in never makes an
+	// administrator's open edit form stale.
+	await User.update({ lastSignInAt: new Date() }, { where: { id: user.id }, silent: true });
 	await recordAudit({
 		actorUserId: user.id,
 		action: 'auth.sign_in',
