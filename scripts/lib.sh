@@ -58,6 +58,6 @@ ensure_build() {
 		sort -z | xargs -0 sha1sum | sha1sum | cut -d' ' -f1)
 	if [[ -f build/index.js && -f $stamp && $(cat "$stamp") == "$want" ]]; then return 0; fi
 	say "Building the app"
-	node_modules/.bin/vite build --logLevel warn
+	node_modules/.bin/vite build --logLevel error
 	echo "$want" >"$stamp"
 }

@@ -32,7 +32,7 @@ say "Unit and integration tests (vitest)"
 node_modules/.bin/vitest run
 
 say "Building the app"
-node_modules/.bin/vite build --logLevel warn
+node_modules/.bin/vite build --logLevel error
 
 say "End-to-end tests (Playwright, Debian Chromium)"
 bash scripts/pg.sh reset-db

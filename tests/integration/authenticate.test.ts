@@ -40,7 +40,9 @@ describe('authenticate: answers', () => {
 			ok: true,
 			userId: user.id,
 			email: user.email,
-			name: expect.any(String)
+			name: expect.any(String),
+			role: 'coordinator',
+			organizationId: expect.any(String)
 		});
 	});
 

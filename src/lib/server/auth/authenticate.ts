@@ -5,7 +5,14 @@ import { verifyAgainstDummy, verifyPassword } from './password';
 import { recordAttempt, throttleState } from './throttle';
 
 export type AuthenticateResult =
-	| { ok: true; userId: string; email: string; name: string }
+	| {
+			ok: true;
+			userId: string;
+			email: string;
+			name: string;
+			role: User['role'];
+			organizationId: string;
+	  }
 	| { ok: false; reason: 'invalid' }
 	| { ok: false; reason: 'throttled'; retryAfterSeconds: number };
 
@@ -48,5 +55,12 @@ export async function authenticate(input: {
 		entityId: user.id,
 		ip: input.ip
 	});
-	return { ok: true, userId: user.id, email: user.email, name: user.name };
+	return {
+		ok: true,
+		userId: user.id,
+		email: user.email,
+		name: user.name,
+		role: user.role,
+		organizationId: user.organizationId
+	};
 }

@@ -43,7 +43,10 @@ export const {
 						password: String(credentials.password ?? ''),
 						ip: credentials.ip ? String(credentials.ip) : null
 					});
-					if (result.ok) return { id: result.userId, email: result.email, name: result.name };
+					if (result.ok) {
+						const { userId, email, name, role, organizationId } = result;
+						return { id: userId, email, name, role, organizationId };
+					}
 					throw new SignInRefused(
 						result.reason,
 						result.reason === 'throttled' ? result.retryAfterSeconds : 0
@@ -52,13 +55,23 @@ export const {
 			})
 		],
 		callbacks: {
+			// The session carries who signed in, their organization and role. hooks.server.ts still
+			// re-reads the user on every request: the database, not the cookie, has the last word.
 			jwt({ token, user }) {
-				if (user?.id) token.sub = user.id;
+				if (user?.id) {
+					const claims = user as typeof user & { role: string; organizationId: string };
+					token.sub = claims.id;
+					token.role = claims.role;
+					token.organizationId = claims.organizationId;
+				}
 				return token;
 			},
 			session({ session, token }) {
 				if (token.sub) session.user.id = token.sub;
-				return session;
+				return Object.assign(session, {
+					role: token.role as string | undefined,
+					organizationId: token.organizationId as string | undefined
+				});
 			}
 		},
 		logger: {
