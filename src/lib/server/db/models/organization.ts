@@ -55,23 +55,23 @@ export class OrganizationTaxId extends Model<
 	declare updatedAt: CreationOptional<Date>;
 }
 
-const id = { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 };
-const timestamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE };
+const id = () => ({ type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 });
+const timestamps = () => ({ createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE });
 
 export function initOrganizationModels(sequelize: Sequelize): void {
 	Organization.init(
 		{
-			id,
+			id: id(),
 			name: { type: DataTypes.TEXT, allowNull: false },
 			kind: { type: DataTypes.TEXT, allowNull: false },
 			countryCode: { type: DataTypes.CHAR(2), allowNull: false },
-			...timestamps
+			...timestamps()
 		},
 		{ sequelize, tableName: 'organizations' }
 	);
 	OrganizationAddress.init(
 		{
-			id,
+			id: id(),
 			purpose: { type: DataTypes.TEXT, allowNull: false },
 			label: DataTypes.TEXT,
 			line1: { type: DataTypes.TEXT, allowNull: false },
@@ -80,17 +80,17 @@ export function initOrganizationModels(sequelize: Sequelize): void {
 			postalCode: DataTypes.TEXT,
 			region: DataTypes.TEXT,
 			countryCode: { type: DataTypes.CHAR(2), allowNull: false },
-			...timestamps
+			...timestamps()
 		},
 		{ sequelize, tableName: 'organization_addresses' }
 	);
 	OrganizationTaxId.init(
 		{
-			id,
+			id: id(),
 			type: { type: DataTypes.TEXT, allowNull: false },
 			value: { type: DataTypes.TEXT, allowNull: false },
 			countryCode: DataTypes.CHAR(2),
-			...timestamps
+			...timestamps()
 		},
 		{ sequelize, tableName: 'organization_tax_ids' }
 	);
