@@ -7,7 +7,11 @@ import { DEMO_ORGANIZATIONS } from './demo-scenario';
 export async function seed(sequelize: Sequelize): Promise<void> {
 	await sequelize.transaction(async (transaction) => {
 		for (const place of DEMO_PLACES) {
-			await Place.findOrCreate({ where: { code: place.code }, defaults: { ...place }, transaction });
+			await Place.findOrCreate({
+				where: { code: place.code },
+				defaults: { ...place },
+				transaction
+			});
 		}
 		for (const party of DEMO_PARTIES) {
 			const orgName = DEMO_ORGANIZATIONS.find((o) => o.key === party.organization)!.name;
@@ -65,7 +69,10 @@ export async function seed(sequelize: Sequelize): Promise<void> {
 				{ transaction }
 			);
 			if (demo.packaging) {
-				await ProductPackaging.create({ productId: product.id, ...demo.packaging }, { transaction });
+				await ProductPackaging.create(
+					{ productId: product.id, ...demo.packaging },
+					{ transaction }
+				);
 			}
 		}
 	});

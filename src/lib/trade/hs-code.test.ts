@@ -78,9 +78,7 @@ describe('national subdivisions', () => {
 		expect([...HS_CODE_LENGTHS]).toEqual([6, 8, 10]);
 		for (let length = 1; length <= 12; length++) {
 			const code = '851822000000'.slice(0, length);
-			expect(isHsCode(code), code).toBe(
-				(HS_CODE_LENGTHS as readonly number[]).includes(length)
-			);
+			expect(isHsCode(code), code).toBe((HS_CODE_LENGTHS as readonly number[]).includes(length));
 		}
 	});
 });
@@ -137,7 +135,9 @@ describe('input handling', () => {
 			.filter((n) => n !== 77)
 			.map((n) => String(n).padStart(2, '0'));
 		const headingDigits = fc.integer({ min: 1, max: 99 }).map((n) => String(n).padStart(2, '0'));
-		const rest = fc.constantFrom(2, 4, 6).chain((n) => fc.stringMatching(new RegExp(`^[0-9]{${n}}$`)));
+		const rest = fc
+			.constantFrom(2, 4, 6)
+			.chain((n) => fc.stringMatching(new RegExp(`^[0-9]{${n}}$`)));
 		fc.assert(
 			fc.property(chapter, headingDigits, rest, (c, h, r) => {
 				const code = `${c}${h}${r}`;

@@ -84,7 +84,9 @@ export function validateHsCode(input: string): HsCodeResult {
 		);
 	}
 	if (code.slice(2, 4) === '00') {
-		return invalid(`Heading ${code.slice(0, 4)} does not exist: headings in a chapter start at 01.`);
+		return invalid(
+			`Heading ${code.slice(0, 4)} does not exist: headings in a chapter start at 01.`
+		);
 	}
 	const parts = partsOf(code);
 	return Object.freeze({ ok: true, normalized: code, formatted: formatDigits(code), parts });

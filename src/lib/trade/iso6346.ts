@@ -17,12 +17,13 @@ export const EQUIPMENT_CATEGORIES = ['U', 'J', 'Z'] as const;
 export type EquipmentCategory = (typeof EQUIPMENT_CATEGORIES)[number];
 
 /** Plain-English labels for the equipment category identifier (ISO 6346, from memory). */
-export const EQUIPMENT_CATEGORY_LABELS: Readonly<Record<EquipmentCategory, string>> =
-	Object.freeze({
+export const EQUIPMENT_CATEGORY_LABELS: Readonly<Record<EquipmentCategory, string>> = Object.freeze(
+	{
 		U: 'Freight container',
 		J: 'Detachable container equipment',
 		Z: 'Trailer or chassis'
-	});
+	}
+);
 
 export function isEquipmentCategory(value: unknown): value is EquipmentCategory {
 	return typeof value === 'string' && (EQUIPMENT_CATEGORIES as readonly string[]).includes(value);
@@ -51,8 +52,7 @@ export interface ContainerNumber {
 }
 
 export type ContainerNumberResult =
-	| ({ readonly ok: true } & ContainerNumber)
-	| { readonly ok: false; readonly message: string };
+	({ readonly ok: true } & ContainerNumber) | { readonly ok: false; readonly message: string };
 
 /** Remove spaces and hyphens (anywhere) and upper-case. Other characters are kept. */
 export function normalizeContainerInput(input: string): string {
@@ -115,7 +115,9 @@ export function validateContainerNumber(input: string): ContainerNumberResult {
 		return invalid(`The serial number (characters 5 to 10) must be 6 digits, not "${serial}".`);
 	}
 	if (!/^[0-9]$/.test(checkDigit)) {
-		return invalid(`The last character is the check digit and must be a digit, not "${checkDigit}".`);
+		return invalid(
+			`The last character is the check digit and must be a digit, not "${checkDigit}".`
+		);
 	}
 	const expected = containerCheckDigit(value.slice(0, 10));
 	if (Number(checkDigit) !== expected) {
@@ -136,8 +138,8 @@ export function validateContainerNumber(input: string): ContainerNumberResult {
 export function parseContainerNumber(input: string): ContainerNumber | undefined {
 	const result = validateContainerNumber(input);
 	if (!result.ok) return undefined;
-	const { ok: _ok, ...parts } = result;
-	return Object.freeze(parts);
+	const { ownerCode, category, serial, checkDigit, normalized, formatted } = result;
+	return Object.freeze({ ownerCode, category, serial, checkDigit, normalized, formatted });
 }
 
 /** True when `input` is a valid container number (separators and lower case allowed). */

@@ -31,10 +31,10 @@ export const FINAL_STATUSES: readonly ShipmentStatus[] = Object.freeze(['deliver
 export const SHIPMENT_STATUS_LABELS: Readonly<Record<ShipmentStatus, string>> = Object.freeze({
 	draft: 'Draft',
 	booked: 'Booked',
-	documents_issued: 'Papers ready',
+	documents_issued: 'Documents issued',
 	in_transit: 'On the way',
 	arrived: 'Arrived',
-	cleared: 'Through customs',
+	cleared: 'Cleared customs',
 	delivered: 'Delivered',
 	cancelled: 'Cancelled'
 });
@@ -87,7 +87,10 @@ export function canTransition(from: ShipmentStatus, to: ShipmentStatus): boolean
 }
 
 /** What kind of step `from` → `to` is, or undefined when it is not allowed. */
-export function transitionKind(from: ShipmentStatus, to: ShipmentStatus): TransitionKind | undefined {
+export function transitionKind(
+	from: ShipmentStatus,
+	to: ShipmentStatus
+): TransitionKind | undefined {
 	if (!canTransition(from, to)) return undefined;
 	if (to === 'cancelled') return 'cancel';
 	return STEPS_BACK[from] === to ? 'back' : 'forward';

@@ -45,7 +45,9 @@ export function validateLocationCode(input: string): LocationCodeResult {
 	const countryCode = code.slice(0, 2);
 	const placeCode = code.slice(2);
 	if (!/^[A-Z]{2}$/.test(countryCode)) {
-		return invalid(`The first 2 characters are the country code and must be letters, not "${countryCode}".`);
+		return invalid(
+			`The first 2 characters are the country code and must be letters, not "${countryCode}".`
+		);
 	}
 	if (!isCountryCode(countryCode)) {
 		return invalid(`"${countryCode}" is not an ISO 3166-1 country code.`);
@@ -76,7 +78,13 @@ export function formatLocationCode(input: string): string {
 }
 
 /** Kinds of place a shipment passes through (Landfall's own list). */
-export const PLACE_KINDS = ['seaport', 'airport', 'inland', 'rail_terminal', 'road_terminal'] as const;
+export const PLACE_KINDS = [
+	'seaport',
+	'airport',
+	'inland',
+	'rail_terminal',
+	'road_terminal'
+] as const;
 export type PlaceKind = (typeof PLACE_KINDS)[number];
 
 export const PLACE_KIND_LABELS: Readonly<Record<PlaceKind, string>> = Object.freeze({
@@ -109,7 +117,10 @@ export function placeKindLabel(kind: PlaceKind): string {
 }
 
 /** `{ value, label }` pairs in list order, for select inputs. */
-export function placeKindOptions(): readonly { readonly value: PlaceKind; readonly label: string }[] {
+export function placeKindOptions(): readonly {
+	readonly value: PlaceKind;
+	readonly label: string;
+}[] {
 	return PLACE_KINDS.map((value) => Object.freeze({ value, label: PLACE_KIND_LABELS[value] }));
 }
 

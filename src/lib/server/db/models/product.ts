@@ -8,10 +8,10 @@ import {
 	type Sequelize
 } from 'sequelize';
 
-export const BATTERY_CONFIGS = ['none', 'contained', 'packed_with', 'standalone'] as const;
-export type BatteryConfig = (typeof BATTERY_CONFIGS)[number];
-export const BATTERY_CHEMISTRIES = ['lithium_ion', 'lithium_metal'] as const;
-export type BatteryChemistry = (typeof BATTERY_CHEMISTRIES)[number];
+import type { BATTERY_CHEMISTRY_VALUES, BATTERY_CONFIG_VALUES } from '../../../products';
+
+export type BatteryConfig = (typeof BATTERY_CONFIG_VALUES)[number];
+export type BatteryChemistry = (typeof BATTERY_CHEMISTRY_VALUES)[number];
 
 // Decimal columns are strings (exact); integers are numbers.
 export class Product extends Model<InferAttributes<Product>, InferCreationAttributes<Product>> {

@@ -1,0 +1,284 @@
+/**
+ * Cartons for shipment lines: how many, what is in the last one, their masses and volume, and
+ * carton numbers running on from line to line (the packing list prints these ranges).
+ *
+ * Pure module: no framework imports.
+ */
+import type Decimal from 'decimal.js';
+import { ZERO, boxM3, exact, kgOut, m3Out } from './exact';
+import {
+	MESSAGES,
+	checkMillimetres,
+	isDecimalString,
+	isPositiveDecimalString,
+	isPositiveInt,
+	prefixProblems,
+	type Problem
+} from './problem';
+
+export const ORIENTATIONS = ['any', 'this_way_up'] as const;
+/** 'this_way_up': the carton's height stays vertical. 'any': it may stand on any face. */
+export type Orientation = (typeof ORIENTATIONS)[number];
+
+export interface Packaging {
+	/** Units in a full carton. */
+	unitsPerCarton: number;
+	lengthMm: number;
+	widthMm: number;
+	heightMm: number;
+	/** Gross mass of a FULL carton (units + carton + dunnage), kg. */
+	cartonGrossKg: string;
+	orientation: Orientation;
+	/** Mass a carton may carry on top of it, kg; null = must not be stacked on. */
+	maxLoadOnTopKg: string | null;
+}
+
+export interface CartonLineInput {
+	quantity: number;
+	netKgPerUnit: string;
+	packaging: Packaging;
+}
+
+/** Consecutive cartons that are alike: the full ones, or the one remainder carton. */
+export interface CartonGroup {
+	fromCarton: number;
+	toCarton: number;
+	cartons: number;
+	unitsPerCarton: number;
+	netKgPerCarton: string;
+	grossKgPerCarton: string;
+}
+
+export interface CartonLine {
+	quantity: number;
+	unitsPerCarton: number;
+	fullCartons: number;
+	/** Units in the last, part-filled carton; 0 when every carton is full. */
+	remainderUnits: number;
+	/** fullCartons, plus 1 when there is a remainder carton. */
+	cartons: number;
+	firstCarton: number;
+	lastCarton: number;
+	groups: CartonGroup[];
+	carton: {
+		lengthMm: number;
+		widthMm: number;
+		heightMm: number;
+		volumeM3: string;
+		/** Carton and dunnage without the units: full gross − unitsPerCarton × net. */
+		tareKg: string;
+		fullGrossKg: string;
+	};
+	netKg: string;
+	grossKg: string;
+	volumeM3: string;
+}
+
+export type CartonLineResult = { ok: true; line: CartonLine } | { ok: false; problems: Problem[] };
+
+export interface CartonTotals {
+	units: number;
+	cartons: number;
+	netKg: string;
+	grossKg: string;
+	volumeM3: string;
+}
+
+export type CartonLinesResult =
+	{ ok: true; lines: CartonLine[]; totals: CartonTotals } | { ok: false; problems: Problem[] };
+
+/** Full cartons and the units left over for a part-filled last carton. */
+export function countCartons(
+	quantity: number,
+	unitsPerCarton: number
+): { fullCartons: number; remainderUnits: number; cartons: number } {
+	const fullCartons = Math.floor(quantity / unitsPerCarton);
+	const remainderUnits = quantity - fullCartons * unitsPerCarton;
+	return { fullCartons, remainderUnits, cartons: fullCartons + (remainderUnits > 0 ? 1 : 0) };
+}
+
+/** Exact masses of one line's cartons (kg). */
+export interface CartonMasses {
+	netPerUnit: Decimal;
+	tare: Decimal;
+	fullGross: Decimal;
+	/** Gross of the remainder carton, or null when there is none. */
+	remainderGross: Decimal | null;
+	net: Decimal;
+	gross: Decimal;
+}
+
+/** The exact masses for a line whose input is valid (see `checkCartonLine`). */
+export function cartonMasses(input: CartonLineInput): CartonMasses {
+	const { quantity, packaging } = input;
+	const netPerUnit = exact(input.netKgPerUnit);
+	const fullGross = exact(packaging.cartonGrossKg);
+	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
+	const { cartons, remainderUnits } = countCartons(quantity, packaging.unitsPerCarton);
+	const net = netPerUnit.times(quantity);
+	return {
+		netPerUnit,
+		tare,
+		fullGross,
+		remainderGross: remainderUnits > 0 ? tare.plus(netPerUnit.times(remainderUnits)) : null,
+		net,
+		gross: tare.times(cartons).plus(net)
+	};
+}
+
+/** Problems with the packaging alone (paths relative to the packaging). */
+export function checkPackaging(packaging: Packaging): Problem[] {
+	const problems: Problem[] = [];
+	if (!isPositiveInt(packaging.unitsPerCarton)) {
+		problems.push({ path: 'unitsPerCarton', message: MESSAGES.positiveInt });
+	}
+	checkMillimetres({ ...packaging }, ['lengthMm', 'widthMm', 'heightMm'], problems);
+	if (!isPositiveDecimalString(packaging.cartonGrossKg)) {
+		problems.push({ path: 'cartonGrossKg', message: MESSAGES.positiveDecimal });
+	}
+	if (!(ORIENTATIONS as readonly string[]).includes(packaging.orientation)) {
+		problems.push({ path: 'orientation', message: 'Choose "any" or "this_way_up".' });
+	}
+	if (packaging.maxLoadOnTopKg !== null && !isDecimalString(packaging.maxLoadOnTopKg)) {
+		problems.push({
+			path: 'maxLoadOnTopKg',
+			message: `${MESSAGES.decimal} Leave empty (null) when cartons must not be stacked on.`
+		});
+	}
+	return problems;
+}
+
+/**
+ * The tare problem, when the full-carton gross is below the units' net mass (path relative to
+ * the product: "packaging.cartonGrossKg"), or null. Inputs must be well-formed.
+ */
+export function tareProblem(netKgPerUnit: string, packaging: Packaging): Problem | null {
+	const units = exact(netKgPerUnit).times(packaging.unitsPerCarton);
+	if (!exact(packaging.cartonGrossKg).lessThan(units)) return null;
+	return {
+		path: 'packaging.cartonGrossKg',
+		message:
+			`A full carton’s gross (${packaging.cartonGrossKg} kg) must be at least the net mass of ` +
+			`its ${packaging.unitsPerCarton} units (${units.toFixed()} kg).`
+	};
+}
+
+/** Problems with one line's input; paths are relative to the line input. */
+export function checkCartonLine(input: CartonLineInput): Problem[] {
+	const problems: Problem[] = [];
+	if (!isPositiveInt(input.quantity)) {
+		problems.push({ path: 'quantity', message: MESSAGES.positiveInt });
+	}
+	const netOk = isPositiveDecimalString(input.netKgPerUnit);
+	if (!netOk) problems.push({ path: 'netKgPerUnit', message: MESSAGES.positiveDecimal });
+	const packagingProblems = checkPackaging(input.packaging);
+	problems.push(...prefixProblems('packaging', packagingProblems));
+	if (netOk && packagingProblems.length === 0) {
+		const tare = tareProblem(input.netKgPerUnit, input.packaging);
+		if (tare !== null) problems.push(tare);
+	}
+	return problems;
+}
+
+/** One line's cartons, numbered from `firstCarton`. */
+export function packCartons(input: CartonLineInput, firstCarton = 1): CartonLineResult {
+	const problems = checkCartonLine(input);
+	if (!isPositiveInt(firstCarton)) {
+		problems.push({ path: 'firstCarton', message: MESSAGES.positiveInt });
+	}
+	if (problems.length > 0) return { ok: false, problems };
+
+	const { quantity, packaging } = input;
+	const upc = packaging.unitsPerCarton;
+	const count = countCartons(quantity, upc);
+	const masses = cartonMasses(input);
+	const cartonM3 = boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm);
+	const lastCarton = firstCarton + count.cartons - 1;
+
+	const groups: CartonGroup[] = [];
+	if (count.fullCartons > 0) {
+		groups.push({
+			fromCarton: firstCarton,
+			toCarton: firstCarton + count.fullCartons - 1,
+			cartons: count.fullCartons,
+			unitsPerCarton: upc,
+			netKgPerCarton: kgOut(masses.netPerUnit.times(upc)),
+			grossKgPerCarton: kgOut(masses.fullGross)
+		});
+	}
+	if (masses.remainderGross !== null) {
+		groups.push({
+			fromCarton: lastCarton,
+			toCarton: lastCarton,
+			cartons: 1,
+			unitsPerCarton: count.remainderUnits,
+			netKgPerCarton: kgOut(masses.netPerUnit.times(count.remainderUnits)),
+			grossKgPerCarton: kgOut(masses.remainderGross)
+		});
+	}
+
+	return {
+		ok: true,
+		line: {
+			quantity,
+			unitsPerCarton: upc,
+			...count,
+			firstCarton,
+			lastCarton,
+			groups,
+			carton: {
+				lengthMm: packaging.lengthMm,
+				widthMm: packaging.widthMm,
+				heightMm: packaging.heightMm,
+				volumeM3: m3Out(cartonM3),
+				tareKg: kgOut(masses.tare),
+				fullGrossKg: kgOut(masses.fullGross)
+			},
+			netKg: kgOut(masses.net),
+			grossKg: kgOut(masses.gross),
+			volumeM3: m3Out(cartonM3.times(count.cartons))
+		}
+	};
+}
+
+/**
+ * Several lines' cartons, numbered consecutively across the lines in order (line 1 cartons
+ * 1–40, line 2 cartons 41–55…), with shipment totals. Problem paths start with the line index.
+ */
+export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLinesResult {
+	const problems: Problem[] = [];
+	inputs.forEach((input, index) => {
+		problems.push(...prefixProblems(String(index), checkCartonLine(input)));
+	});
+	if (problems.length > 0) return { ok: false, problems };
+
+	const lines: CartonLine[] = [];
+	let next = 1;
+	let units = 0;
+	let net = ZERO;
+	let gross = ZERO;
+	let mm3Volume = ZERO;
+	for (const input of inputs) {
+		const result = packCartons(input, next);
+		if (!result.ok) return result; // unreachable: inputs were checked above
+		lines.push(result.line);
+		next = result.line.lastCarton + 1;
+		units += input.quantity;
+		const masses = cartonMasses(input);
+		net = net.plus(masses.net);
+		gross = gross.plus(masses.gross);
+		const { lengthMm, widthMm, heightMm } = input.packaging;
+		mm3Volume = mm3Volume.plus(boxM3(lengthMm, widthMm, heightMm).times(result.line.cartons));
+	}
+	return {
+		ok: true,
+		lines,
+		totals: {
+			units,
+			cartons: next - 1,
+			netKg: kgOut(net),
+			grossKg: kgOut(gross),
+			volumeM3: m3Out(mm3Volume)
+		}
+	};
+}

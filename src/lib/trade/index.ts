@@ -1,0 +1,11 @@
+/**
+ * Trade codes and rules: ISO 6346 container numbers, HS codes, UN/LOCODE place codes, the
+ * shipment life cycle and transport modes, Incoterms 2020.
+ *
+ * Pure modules: no framework imports.
+ */
+export * from './iso6346';
+export * from './hs-code';
+export * from './unlocode';
+export * from './shipment-status';
+export * from './incoterms';
