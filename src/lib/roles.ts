@@ -50,20 +50,33 @@ export interface NavItem {
 /** The navigation a role sees; later features add their entries here. */
 export function navigationFor(role: Role, organizationId: string): NavItem[] {
 	const overview = { href: '/', label: 'Overview' };
+	const shipments = { href: '/shipments', label: 'Shipments' };
+	const products = { href: '/products', label: 'Products' };
 	switch (role) {
 		case 'admin':
 			return [
 				overview,
+				shipments,
+				products,
 				{ href: '/organizations', label: 'Organizations' },
 				{ href: '/admin/users', label: 'People & access' },
 				{ href: '/admin/audit', label: 'Audit trail' }
 			];
 		case 'coordinator':
 		case 'finance':
-			return [overview, { href: '/organizations', label: 'Organizations' }];
+			return [overview, shipments, products, { href: '/organizations', label: 'Organizations' }];
 		case 'broker':
-			return [overview, { href: `/organizations/${organizationId}`, label: 'Our firm' }];
+			return [
+				overview,
+				shipments,
+				products,
+				{ href: `/organizations/${organizationId}`, label: 'Our firm' }
+			];
 		case 'customer':
-			return [overview, { href: `/organizations/${organizationId}`, label: 'Our company' }];
+			return [
+				overview,
+				shipments,
+				{ href: `/organizations/${organizationId}`, label: 'Our company' }
+			];
 	}
 }

@@ -257,7 +257,7 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 	let units = 0;
 	let net = ZERO;
 	let gross = ZERO;
-	let mm3Volume = ZERO;
+	let volume = ZERO;
 	for (const input of inputs) {
 		const result = packCartons(input, next);
 		if (!result.ok) return result; // unreachable: inputs were checked above
@@ -268,7 +268,7 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 		net = net.plus(masses.net);
 		gross = gross.plus(masses.gross);
 		const { lengthMm, widthMm, heightMm } = input.packaging;
-		mm3Volume = mm3Volume.plus(boxM3(lengthMm, widthMm, heightMm).times(result.line.cartons));
+		volume = volume.plus(boxM3(lengthMm, widthMm, heightMm).times(result.line.cartons));
 	}
 	return {
 		ok: true,
@@ -278,7 +278,7 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 			cartons: next - 1,
 			netKg: kgOut(net),
 			grossKg: kgOut(gross),
-			volumeM3: m3Out(mm3Volume)
+			volumeM3: m3Out(volume)
 		}
 	};
 }

@@ -122,8 +122,10 @@ function guillotine(L: number, W: number, a: number, b: number): LayerBlock[] | 
 	const ny = py.points.length;
 	if (((nx - 1) * (ny - 1) * (nx + ny)) / 2 > LAYER_SEARCH_BUDGET) return null;
 
+	// Most cartons; among equals, fewest blocks (a simpler pattern to load and to draw).
 	const footprint = a * b;
 	const best = new Int32Array(nx * ny);
+	const parts = new Int32Array(nx * ny);
 	const kind = new Uint8Array(nx * ny);
 	const arg = new Int32Array(nx * ny);
 	for (let i = 1; i < nx; i++) {
@@ -136,35 +138,42 @@ function guillotine(L: number, W: number, a: number, b: number): LayerBlock[] | 
 			const countB = blockCount(p, q, b, a);
 			let value = countA;
 			let how = BLOCK_A;
-			let cut = 0;
 			if (countB > value) {
 				value = countB;
 				how = BLOCK_B;
 			}
+			let pieces = value > 0 ? 1 : 0;
+			let cut = 0;
+			const better = (v: number, n: number): boolean => v > value || (v === value && n < pieces);
 			// Cut across the length at x = P[k] ≤ p/2; the rest shrinks to the largest sum that fits.
-			for (let k = 1; k < i && value < bound; k++) {
+			for (let k = 1; k < i && (value < bound || pieces > 1); k++) {
 				const x = px.points[k] ?? 0;
 				if (2 * x > p) break;
 				const rest = px.floor[p - x] ?? 0;
 				const v = (best[k * ny + j] ?? 0) + (best[rest * ny + j] ?? 0);
-				if (v > value) {
+				const n = (parts[k * ny + j] ?? 0) + (parts[rest * ny + j] ?? 0);
+				if (better(v, n)) {
 					value = v;
+					pieces = n;
 					how = CUT_X;
 					cut = k;
 				}
 			}
-			for (let k = 1; k < j && value < bound; k++) {
+			for (let k = 1; k < j && (value < bound || pieces > 1); k++) {
 				const y = py.points[k] ?? 0;
 				if (2 * y > q) break;
 				const rest = py.floor[q - y] ?? 0;
 				const v = (best[i * ny + k] ?? 0) + (best[i * ny + rest] ?? 0);
-				if (v > value) {
+				const n = (parts[i * ny + k] ?? 0) + (parts[i * ny + rest] ?? 0);
+				if (better(v, n)) {
 					value = v;
+					pieces = n;
 					how = CUT_Y;
 					cut = k;
 				}
 			}
 			best[at] = value;
+			parts[at] = pieces;
 			kind[at] = how;
 			arg[at] = cut;
 		}
@@ -232,6 +241,19 @@ function twoBlock(L: number, W: number, a: number, b: number): LayerBlock[] {
 	return bestBlocks;
 }
 
+/** Recent results, so repeated cartons (same product on several lines, repeated requests) are free. */
+const memo = new Map<string, LayerPattern>();
+const MEMO_SIZE = 500;
+
+function copy(pattern: LayerPattern): LayerPattern {
+	return {
+		...pattern,
+		footprintMm: [...pattern.footprintMm],
+		blocks: pattern.blocks.map((b) => ({ ...b })),
+		blockCounts: { ...pattern.blockCounts }
+	};
+}
+
 /**
  * The best layer found for cartons with footprint `firstMm` × `secondMm` on a pallet
  * `palletLengthMm` × `palletWidthMm` (all whole millimetres, > 0). Count 0 when the footprint
@@ -253,10 +275,19 @@ export function layerPattern(
 			throw new RangeError(`${name} must be a whole number of millimetres from 1 to 1000000`);
 		}
 	}
-	const L = palletLengthMm;
-	const W = palletWidthMm;
-	const a = firstMm;
-	const b = secondMm;
+	const key = `${palletLengthMm}×${palletWidthMm}:${firstMm}×${secondMm}`;
+	const known = memo.get(key);
+	if (known !== undefined) return copy(known);
+	const pattern = search(palletLengthMm, palletWidthMm, firstMm, secondMm);
+	if (memo.size >= MEMO_SIZE) {
+		const oldest = memo.keys().next();
+		if (oldest.done !== true) memo.delete(oldest.value);
+	}
+	memo.set(key, pattern);
+	return copy(pattern);
+}
+
+function search(L: number, W: number, a: number, b: number): LayerPattern {
 	let method: LayerMethod = 'guillotine';
 	let blocks = guillotine(L, W, a, b);
 	if (blocks === null) {

@@ -237,12 +237,12 @@ function uprights(carton: PalletCarton): Upright[] {
 }
 
 function mm(value: number): string {
-	return show(exact(value), 0);
+	return String(value);
 }
 
 /**
  * How the carton sits on a full pallet: the orientation that fits the most cartons per pallet
- * (ties: height vertical first, then the lower load). An error result, not a throw, when the
+ * (ties: the carton's height vertical if that is among them, else the lower load). An error result, not a throw, when the
  * carton cannot go on this pallet at all.
  */
 export function palletStowage(
@@ -304,10 +304,12 @@ export function palletStowage(
 						: 'height',
 			tried
 		};
+		// The carton's own height stays vertical on a tie; other faces tie-break on the lower load.
 		if (
 			best === null ||
 			candidate.cartonsPerPallet > best.cartonsPerPallet ||
 			(candidate.cartonsPerPallet === best.cartonsPerPallet &&
+				best.verticalSide !== 'height' &&
 				candidate.loadedHeightMm < best.loadedHeightMm)
 		) {
 			best = candidate;
@@ -368,7 +370,11 @@ function planExact(
 			firstCarton: firstOfGroup,
 			lastCarton: firstOfGroup + count * each - 1
 		});
-		exactGroups.push({ pallets: count, loadedHeightMm: heightFor(each), grossPerPallet: grossEach });
+		exactGroups.push({
+			pallets: count,
+			loadedHeightMm: heightFor(each),
+			grossPerPallet: grossEach
+		});
 	};
 	const fullGross = tare.plus(gross.times(perPallet));
 	const lastPalletGross = tare.plus(gross.times(lastCount - 1)).plus(lastGross);
@@ -383,9 +389,7 @@ function planExact(
 	let volume = ZERO;
 	for (const g of exactGroups) {
 		total = total.plus(g.grossPerPallet.times(g.pallets));
-		volume = volume.plus(
-			boxM3(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm).times(g.pallets)
-		);
+		volume = volume.plus(boxM3(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm).times(g.pallets));
 	}
 	const partPallets = lastCount < perPallet ? 1 : 0;
 	return {
@@ -407,7 +411,8 @@ function planExact(
 
 function checkPlanInput(input: PalletPlanInput): Problem[] {
 	const problems: Problem[] = [];
-	if (!isPositiveInt(input.cartons)) problems.push({ path: 'cartons', message: MESSAGES.positiveInt });
+	if (!isPositiveInt(input.cartons))
+		problems.push({ path: 'cartons', message: MESSAGES.positiveInt });
 	for (const field of ['firstCarton', 'firstPallet'] as const) {
 		const value = input[field];
 		if (value !== undefined && !isPositiveInt(value)) {

@@ -1,5 +1,5 @@
 import Decimal from 'decimal.js';
-import { col, fn, UniqueConstraintError, where } from 'sequelize';
+import { col, fn, Op, UniqueConstraintError, where } from 'sequelize';
 import type { ProductInput } from '../../schemas/products';
 import { lbToKg, inchesToMm } from '../../packing/units';
 import type { SessionUser } from '../auth/session-user';
@@ -92,7 +92,9 @@ export async function productsBySku(skus: string[]): Promise<Map<string, Product
 	if (skus.length === 0) return new Map();
 	const products = await Product.findAll({
 		include,
-		where: where(fn('lower', col('sku')), [...new Set(skus.map((s) => s.toLowerCase()))])
+		where: where(fn('lower', col('Product.sku')), {
+			[Op.in]: [...new Set(skus.map((s) => s.toLowerCase()))]
+		})
 	});
 	return new Map(products.map((p) => [p.sku.toLowerCase(), toRow(p)]));
 }

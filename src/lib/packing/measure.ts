@@ -1,0 +1,210 @@
+/**
+ * Measure a shipment: cartons per line (numbered across lines), totals, optionally pallets, and
+ * the chargeable weight per mode — of the cartons, or of the pallets when palletised.
+ *
+ * The input is validated with `measureInputSchema` here too, so a caller that skipped it still
+ * gets field-path problems instead of a throw. Any problem means no measurement (`ok: false`):
+ * a partial packing list or total would be worse than none.
+ *
+ * Pure module: no framework imports.
+ */
+import { chargeableWeights, type ChargeablePiece, type ChargeableWeight } from './chargeable';
+import { cartonMasses, packCartons, type CartonLine, type CartonTotals } from './cartons';
+import { ZERO, boxM3, exact, kgOut, m3Out } from './exact';
+import { planPalletsExact, type PalletPlan, type PalletSpec } from './pallets';
+import type { Problem } from './problem';
+import { measureInputSchema, type MeasureInput } from './schema';
+
+export interface MeasuredLine extends CartonLine {
+	/** Index of the line in the input (0-based). */
+	lineIndex: number;
+	sku: string;
+}
+
+export interface MeasuredPallets {
+	pallet: PalletSpec;
+	lines: { lineIndex: number; sku: string; plan: PalletPlan }[];
+	/** Pallets for the whole shipment, numbered 1… across lines. */
+	pallets: number;
+	tareKg: string;
+	/** Cartons plus pallet tares. */
+	grossKg: string;
+	/** Pallet footprint × loaded height, summed. */
+	volumeM3: string;
+}
+
+export type MeasureResult =
+	| {
+			ok: true;
+			lines: MeasuredLine[];
+			/** The cartons (pallets not included). */
+			totals: CartonTotals;
+			pallets: MeasuredPallets | null;
+			chargeable: ChargeableWeight[];
+			/** Always empty here. */
+			problems: Problem[];
+	  }
+	| { ok: false; problems: Problem[] };
+
+function range(noun: string, from: number, to: number): string {
+	return from === to ? `${noun} ${from}` : `${noun}s ${from}–${to}`;
+}
+
+/** Measure a shipment; see the module comment. */
+export function measure(input: MeasureInput): MeasureResult {
+	const parsed = measureInputSchema.safeParse(input);
+	if (!parsed.success) {
+		return {
+			ok: false,
+			problems: parsed.error.issues.map((issue) => ({
+				path: issue.path.map(String).join('.'),
+				message: issue.message
+			}))
+		};
+	}
+	const { products, lines, pallet } = parsed.data;
+	const bySku = new Map(products.map((product) => [product.sku, product]));
+
+	const measured: MeasuredLine[] = [];
+	const cartonPieces: ChargeablePiece[] = [];
+	const problems: Problem[] = [];
+	let nextCarton = 1;
+	let units = 0;
+	let net = ZERO;
+	let gross = ZERO;
+	let volume = ZERO;
+	const masses: ReturnType<typeof cartonMasses>[] = [];
+
+	lines.forEach((line, lineIndex) => {
+		const product = bySku.get(line.sku);
+		const packaging = product?.packaging;
+		// The schema has already reported these; the guard keeps the types honest.
+		if (product === undefined || packaging === undefined || packaging === null) return;
+		const lineInput = { quantity: line.quantity, netKgPerUnit: product.netKgPerUnit, packaging };
+		const packed = packCartons(lineInput, nextCarton);
+		if (!packed.ok) {
+			problems.push(
+				...packed.problems.map((p) => ({
+					path: `lines.${lineIndex}.${p.path}`,
+					message: p.message
+				}))
+			);
+			return;
+		}
+		const c = packed.line;
+		measured.push({ lineIndex, sku: line.sku, ...c });
+		nextCarton = c.lastCarton + 1;
+
+		const m = cartonMasses(lineInput);
+		masses.push(m);
+		units += line.quantity;
+		net = net.plus(m.net);
+		gross = gross.plus(m.gross);
+		volume = volume.plus(
+			boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm).times(c.cartons)
+		);
+		const dims = {
+			lengthMm: packaging.lengthMm,
+			widthMm: packaging.widthMm,
+			heightMm: packaging.heightMm
+		};
+		const label = `Line ${lineIndex + 1}`;
+		if (c.fullCartons > 0) {
+			cartonPieces.push({
+				...dims,
+				grossKg: m.fullGross.toFixed(),
+				count: c.fullCartons,
+				label: `${label}, ${range('carton', c.firstCarton, c.firstCarton + c.fullCartons - 1)}`
+			});
+		}
+		if (m.remainderGross !== null) {
+			cartonPieces.push({
+				...dims,
+				grossKg: m.remainderGross.toFixed(),
+				count: 1,
+				label: `${label}, ${range('carton', c.lastCarton, c.lastCarton)} (part-filled)`
+			});
+		}
+	});
+	if (problems.length > 0) return { ok: false, problems };
+
+	let pallets: MeasuredPallets | null = null;
+	let pieces = cartonPieces;
+	if (pallet !== undefined) {
+		const palletPieces: ChargeablePiece[] = [];
+		const planned: MeasuredPallets['lines'] = [];
+		let nextPallet = 1;
+		let palletGross = ZERO;
+		let palletVolume = ZERO;
+		measured.forEach((line, i) => {
+			const packaging = bySku.get(line.sku)?.packaging;
+			const m = masses[i];
+			if (packaging === undefined || packaging === null || m === undefined) return;
+			const result = planPalletsExact({
+				pallet,
+				carton: {
+					lengthMm: packaging.lengthMm,
+					widthMm: packaging.widthMm,
+					heightMm: packaging.heightMm,
+					grossKg: packaging.cartonGrossKg,
+					orientation: packaging.orientation,
+					maxLoadOnTopKg: packaging.maxLoadOnTopKg
+				},
+				cartons: line.cartons,
+				...(m.remainderGross === null ? {} : { lastCartonGrossKg: m.remainderGross.toFixed() }),
+				firstCarton: line.firstCarton,
+				firstPallet: nextPallet
+			});
+			if (!result.ok) {
+				problems.push({
+					path: 'pallet',
+					message: `Line ${line.lineIndex + 1} (SKU “${line.sku}”): ${result.message}`
+				});
+				return;
+			}
+			planned.push({ lineIndex: line.lineIndex, sku: line.sku, plan: result.plan });
+			nextPallet = result.plan.lastPallet + 1;
+			palletGross = palletGross.plus(result.exact.gross);
+			palletVolume = palletVolume.plus(result.exact.volumeM3);
+			result.exact.groups.forEach((g, k) => {
+				const group = result.plan.groups[k];
+				palletPieces.push({
+					lengthMm: pallet.lengthMm,
+					widthMm: pallet.widthMm,
+					heightMm: g.loadedHeightMm,
+					grossKg: g.grossPerPallet.toFixed(),
+					count: g.pallets,
+					label:
+						`Line ${line.lineIndex + 1}, ` +
+						(group === undefined ? 'pallets' : range('pallet', group.fromPallet, group.toPallet))
+				});
+			});
+		});
+		if (problems.length > 0) return { ok: false, problems };
+		const count = nextPallet - 1;
+		pallets = {
+			pallet,
+			lines: planned,
+			pallets: count,
+			tareKg: kgOut(exact(pallet.tareKg).times(count)),
+			grossKg: kgOut(palletGross),
+			volumeM3: m3Out(palletVolume)
+		};
+		pieces = palletPieces;
+	}
+
+	return {
+		ok: true,
+		lines: measured,
+		totals: {
+			units,
+			cartons: nextCarton - 1,
+			netKg: kgOut(net),
+			grossKg: kgOut(gross),
+			volumeM3: m3Out(volume)
+		},
+		pallets,
+		chargeable: chargeableWeights(pieces),
+		problems: []
+	};
+}

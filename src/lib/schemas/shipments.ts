@@ -1,0 +1,117 @@
+import { z } from 'zod';
+import { INCOTERM_CODES } from '../trade/incoterms';
+import { SHIPMENT_STATUSES, TRANSPORT_MODES } from '../trade/shipment-status';
+import { validateContainerNumber } from '../trade/iso6346';
+import { currencyCode, decimalString, positiveInt } from './fields';
+
+const optionalId = z.union([z.literal(''), z.uuid()]).default('');
+const shortText = (label: string, max = 60) =>
+	z.string().trim().max(max, `${label}: at most ${max} characters.`).default('');
+const isoDate = z
+	.union([z.literal(''), z.iso.date({ error: 'Enter a date as YYYY-MM-DD.' })])
+	.default('');
+
+/** The shipment's header: parties, terms, route, modes and carrier details. */
+export const shipmentSchema = z
+	.object({
+		customerId: z.uuid({ error: 'Choose the customer.' }),
+		consigneeId: optionalId,
+		notifyPartyId: optionalId,
+		brokerId: optionalId,
+		incoterm: z.enum(INCOTERM_CODES, { error: 'Choose an Incoterms® 2020 rule.' }),
+		incotermPlace: z
+			.string()
+			.trim()
+			.min(1, 'Name the place the Incoterms rule refers to, e.g. “Port Klang”.')
+			.max(120),
+		originId: z.uuid({ error: 'Choose where the goods leave from.' }),
+		destinationId: z.uuid({ error: 'Choose where the goods go.' }),
+		modesConsidered: z.array(z.enum(TRANSPORT_MODES)).min(1, 'Tick at least one mode to consider.'),
+		chosenMode: z.union([z.literal(''), z.enum(TRANSPORT_MODES)]).default(''),
+		currency: currencyCode,
+		palletTypeId: optionalId,
+		carrier: shortText('Carrier'),
+		vessel: shortText('Vessel'),
+		voyageOrFlight: shortText('Voyage or flight'),
+		bookingNumber: shortText('Booking number'),
+		etd: isoDate,
+		eta: isoDate,
+		notes: shortText('Notes', 2000),
+		version: z.number().int().min(0).default(0)
+	})
+	.superRefine((s, ctx) => {
+		if (s.originId && s.originId === s.destinationId) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['destinationId'],
+				message: 'Destination and origin are the same place.'
+			});
+		}
+		if (s.chosenMode && !s.modesConsidered.includes(s.chosenMode)) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['chosenMode'],
+				message: 'The chosen mode must be one of those considered.'
+			});
+		}
+		if (s.etd && s.eta && s.eta < s.etd) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['eta'],
+				message: 'Arrival cannot be before departure.'
+			});
+		}
+	});
+export type ShipmentInput = z.infer<typeof shipmentSchema>;
+
+export const shipmentLineSchema = z.object({
+	productId: z.uuid({ error: 'Choose a product.' }),
+	quantity: positiveInt('Quantity', 10_000_000),
+	/** Empty: the product's current price. */
+	unitPrice: z.union([z.literal(''), decimalString('Unit price', 4, 'zero')]).default('')
+});
+
+export const shipmentLinesSchema = z.object({
+	lines: z.array(shipmentLineSchema).max(2000, 'At most 2,000 lines per shipment.'),
+	version: z.number().int().min(0)
+});
+export type ShipmentLinesInput = z.infer<typeof shipmentLinesSchema>;
+
+export const statusChangeSchema = z.object({
+	to: z.enum(SHIPMENT_STATUSES),
+	note: shortText('Note', 500),
+	version: z.number().int().min(0)
+});
+
+export const containerSchema = z.object({
+	containerNumber: z
+		.string()
+		.trim()
+		.transform((value, ctx) => {
+			const result = validateContainerNumber(value);
+			if (!result.ok) {
+				ctx.addIssue({ code: 'custom', message: result.message });
+				return z.NEVER;
+			}
+			return result.normalized;
+		}),
+	containerTypeId: optionalId,
+	sealNumber: shortText('Seal number', 40),
+	version: z.number().int().min(0)
+});
+
+/** Query of the shipments list (and GET /api/v1/shipments). */
+export const SHIPMENT_SORTS = ['reference', 'etd', 'created', 'status', 'customer'] as const;
+export const shipmentListQuerySchema = z.object({
+	status: z.union([z.literal(''), z.enum(SHIPMENT_STATUSES)]).default(''),
+	customerId: optionalId,
+	mode: z.union([z.literal(''), z.enum(TRANSPORT_MODES)]).default(''),
+	from: isoDate,
+	to: isoDate,
+	q: z.string().trim().max(60).default(''),
+	sort: z.enum(SHIPMENT_SORTS).default('created'),
+	dir: z.enum(['asc', 'desc']).default('desc'),
+	page: z.coerce.number().int().min(1).max(100_000).default(1),
+	pageSize: z.coerce.number().int().min(1).max(200).default(25)
+});
+export type ShipmentListQuery = z.infer<typeof shipmentListQuerySchema>;

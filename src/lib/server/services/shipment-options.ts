@@ -1,0 +1,62 @@
+import { ContainerTypeRow, Organization, PalletTypeRow, Party, Place } from '../db/models';
+import { listProducts } from './products';
+
+/** Choices for the shipment forms: organizations, parties, places, equipment, products. */
+export async function shipmentFormOptions() {
+	const [organizations, parties, places, palletTypes, containerTypes, products] = await Promise.all(
+		[
+			Organization.findAll({
+				attributes: ['id', 'name', 'kind'],
+				order: [['name', 'ASC']],
+				raw: true
+			}),
+			Party.findAll({
+				attributes: ['id', 'name', 'city', 'countryCode'],
+				order: [['name', 'ASC']],
+				raw: true
+			}),
+			Place.findAll({
+				attributes: ['id', 'code', 'name', 'kind'],
+				order: [['code', 'ASC']],
+				raw: true
+			}),
+			PalletTypeRow.findAll({ order: [['code', 'ASC']], raw: true }),
+			ContainerTypeRow.findAll({
+				attributes: ['id', 'code', 'name'],
+				order: [['code', 'ASC']],
+				raw: true
+			}),
+			listProducts()
+		]
+	);
+	return {
+		customers: organizations
+			.filter((o) => o.kind === 'customer')
+			.map(({ id, name }) => ({ id, name })),
+		brokers: organizations.filter((o) => o.kind === 'broker').map(({ id, name }) => ({ id, name })),
+		parties: parties.map((p) => ({ id: p.id, name: `${p.name} (${p.city}, ${p.countryCode})` })),
+		places: places.map((p) => ({ id: p.id, name: `${p.code} — ${p.name}` })),
+		palletTypes: palletTypes.map((p) => ({
+			id: p.id,
+			code: p.code,
+			name: p.name,
+			lengthMm: p.lengthMm,
+			widthMm: p.widthMm,
+			deckHeightMm: p.deckHeightMm,
+			tareKg: p.tareKg,
+			maxGrossKg: p.maxGrossKg,
+			maxLoadedHeightMm: p.maxLoadedHeightMm
+		})),
+		containerTypes: containerTypes.map(({ id, code, name }) => ({ id, code, name })),
+		products: products.map((p) => ({
+			id: p.id,
+			sku: p.sku,
+			description: p.description,
+			unitPrice: p.unitPrice,
+			currency: p.currency,
+			netKgPerUnit: p.netKgPerUnit,
+			packaging: p.packaging
+		}))
+	};
+}
+export type ShipmentFormOptions = Awaited<ReturnType<typeof shipmentFormOptions>>;

@@ -1,0 +1,167 @@
+import { error, fail, type RequestEvent } from '@sveltejs/kit';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole, requireUser } from '$lib/server/auth/guard';
+import { refuse } from '$lib/server/forms';
+import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import { measureShipment } from '$lib/server/services/shipment-measure';
+import { shipmentFormOptions } from '$lib/server/services/shipment-options';
+import { canEditShipments } from '$lib/server/services/shipment-scope';
+import {
+	EDITABLE_STATUSES,
+	addContainer,
+	changeStatus,
+	removeContainer,
+	replaceLines,
+	updateShipment
+} from '$lib/server/services/shipments';
+import {
+	containerSchema,
+	shipmentLinesSchema,
+	shipmentSchema,
+	statusChangeSchema
+} from '$lib/schemas/shipments';
+import { allowedTransitions } from '$lib/trade/shipment-status';
+import type { Actions, PageServerLoad } from './$types';
+
+// Returns: shipment (header, lines, containers, status history), measure (packing result),
+// canEdit/editable, transitions, options, and the header/lines/container forms.
+export const load: PageServerLoad = async (event) => {
+	const user = requireUser(event);
+	const measured = await measureShipment(user, event.params.shipmentId);
+	if (!measured) error(404, { message: 'No shipment with this id is visible to you.' });
+	const { shipment, result } = measured;
+	const canEdit = canEditShipments(user);
+	const editable = canEdit && EDITABLE_STATUSES.includes(shipment.status);
+	const options = canEdit ? await shipmentFormOptions() : null;
+	const header = {
+		customerId: shipment.customerId,
+		consigneeId: shipment.consigneeId ?? '',
+		notifyPartyId: shipment.notifyPartyId ?? '',
+		brokerId: shipment.brokerId ?? '',
+		incoterm: shipment.incoterm as 'FCA',
+		incotermPlace: shipment.incotermPlace,
+		originId: shipment.originId,
+		destinationId: shipment.destinationId,
+		modesConsidered: shipment.modesConsidered,
+		chosenMode: shipment.chosenMode ?? ('' as const),
+		currency: shipment.currency,
+		palletTypeId: shipment.palletTypeId ?? '',
+		carrier: shipment.carrier ?? '',
+		vessel: shipment.vessel ?? '',
+		voyageOrFlight: shipment.voyageOrFlight ?? '',
+		bookingNumber: shipment.bookingNumber ?? '',
+		etd: shipment.etd ?? '',
+		eta: shipment.eta ?? '',
+		notes: shipment.notes ?? '',
+		version: shipment.version
+	};
+	const lines = shipment.lines.map((l) => ({
+		productId: l.productId,
+		quantity: l.quantity,
+		unitPrice: l.unitPrice
+	}));
+	const [headerForm, linesForm, containerForm] = await Promise.all([
+		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
+		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
+			errors: false,
+			id: 'lines'
+		}),
+		superValidate({ version: shipment.version }, zod4(containerSchema), {
+			errors: false,
+			id: 'container'
+		})
+	]);
+	return {
+		shipment,
+		measure: result,
+		canEdit,
+		editable,
+		transitions: canEdit ? allowedTransitions(shipment.status) : [],
+		options: options && { ...options, currencies: countryAndCurrencyOptions().currencies },
+		headerForm,
+		linesForm,
+		containerForm
+	};
+};
+
+const editor = (event: RequestEvent) => requireRole(event, 'admin', 'coordinator');
+
+export const actions: Actions = {
+	header: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(shipmentSchema), { id: 'header' });
+		if (!form.valid) return fail(400, { form });
+		const result = await updateShipment(
+			user,
+			event.params.shipmentId,
+			form.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: 'Shipment saved.' });
+	},
+	lines: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(shipmentLinesSchema), { id: 'lines' });
+		if (!form.valid) return fail(400, { form });
+		const result = await replaceLines(
+			user,
+			event.params.shipmentId,
+			form.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: `${result.value.lines} line(s) saved.` });
+	},
+	status: async (event) => {
+		const user = editor(event);
+		const data = await event.request.formData();
+		const parsed = statusChangeSchema.safeParse({
+			to: data.get('to'),
+			note: data.get('note') ?? '',
+			version: Number(data.get('version'))
+		});
+		if (!parsed.success)
+			return fail(400, { statusError: 'Choose one of the offered status changes.' });
+		const result = await changeStatus(
+			user,
+			event.params.shipmentId,
+			parsed.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) return fail(result.status, { statusError: result.message });
+		return { statusChanged: parsed.data.to };
+	},
+	addContainer: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(containerSchema), { id: 'container' });
+		if (!form.valid) return fail(400, { form });
+		const result = await addContainer(
+			user,
+			event.params.shipmentId,
+			form.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: `Container ${form.data.containerNumber} added.` });
+	},
+	removeContainer: async (event) => {
+		const user = editor(event);
+		const data = await event.request.formData();
+		const containerId = String(data.get('containerId') ?? '');
+		const version = Number(data.get('version'));
+		if (!/^[0-9a-f-]{36}$/i.test(containerId) || !Number.isInteger(version)) {
+			return fail(400, { removeError: 'That container could not be identified.' });
+		}
+		const result = await removeContainer(
+			user,
+			event.params.shipmentId,
+			containerId,
+			version,
+			event.getClientAddress()
+		);
+		if (!result.ok) return fail(result.status, { removeError: result.message });
+		return { removed: true };
+	}
+};
