@@ -20,10 +20,21 @@ const OWN_ORG_PAGE: Expect = { anonymous: 303, default: 200 };
 /** Another customer's organization: invisible (404) to customers and brokers. */
 const OTHER_ORG_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
 const OTHER_ORG_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
+const EDITOR_PAGE: Expect = { anonymous: 303, admin: 200, coordinator: 200, default: 403 };
+/** An editor's empty form is rejected field by field (400); other roles never reach the action. */
+const EDITOR_ACTION: Expect = { anonymous: 303, admin: 400, coordinator: 400, default: 403 };
+const EDITOR_API: Expect = { anonymous: 401, admin: 400, coordinator: 400, default: 403 };
+const READ_PRODUCTS: Expect = { anonymous: 303, customer: 403, default: 200 };
+/** The other customer's shipment: a 404 to customers and to brokers not assigned to it. */
+const OTHER_SHIPMENT_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
+const OTHER_SHIPMENT_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
 
 interface Probe {
-	method: 'GET' | 'POST' | 'PATCH';
-	/** Path with placeholders :own (the user's organization), :other (another customer), :user. */
+	method: 'GET' | 'POST' | 'PATCH' | 'PUT';
+	/**
+	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
+	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's).
+	 */
 	path: string;
 	expect: Expect;
 	body?: Record<string, unknown>;
@@ -72,6 +83,53 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 		]
 	},
 	'/admin/audit': { page: [{ method: 'GET', path: '/admin/audit', expect: ADMIN_PAGE }] },
+	'/products': { page: [{ method: 'GET', path: '/products', expect: READ_PRODUCTS }] },
+	'/products/new': {
+		page: [{ method: 'GET', path: '/products/new', expect: EDITOR_PAGE }],
+		actions: [{ method: 'POST', path: '/products/new', form: { sku: '' }, expect: EDITOR_ACTION }]
+	},
+	'/products/[productId=uuid]': {
+		page: [{ method: 'GET', path: '/products/:product', expect: READ_PRODUCTS }],
+		actions: [
+			{ method: 'POST', path: '/products/:product', form: { sku: '' }, expect: EDITOR_ACTION }
+		]
+	},
+	'/shipments': { page: [{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 }] },
+	'/shipments/new': {
+		page: [{ method: 'GET', path: '/shipments/new', expect: EDITOR_PAGE }],
+		actions: [
+			{ method: 'POST', path: '/shipments/new', form: { customerId: '' }, expect: EDITOR_ACTION }
+		]
+	},
+	'/shipments/[shipmentId=uuid]': {
+		page: [
+			{ method: 'GET', path: '/shipments/:ship', expect: SIGNED_IN_200 },
+			{ method: 'GET', path: '/shipments/:otherShip', expect: OTHER_SHIPMENT_PAGE }
+		],
+		actions: [
+			{ method: 'POST', path: '/shipments/:ship?/status', form: { to: '' }, expect: EDITOR_ACTION },
+			{ method: 'POST', path: '/shipments/:ship?/header', form: { x: '' }, expect: EDITOR_ACTION },
+			// An empty line list with version 0 is well-formed but stale: the editors get 409.
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/lines',
+				form: { x: '' },
+				expect: { anonymous: 303, admin: 409, coordinator: 409, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/addContainer',
+				form: { containerNumber: 'X' },
+				expect: EDITOR_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/removeContainer',
+				form: { containerId: 'x' },
+				expect: EDITOR_ACTION
+			}
+		]
+	},
 	'/api/health': { api: [{ method: 'GET', path: '/api/health', expect: { default: 200 } }] },
 	'/api/v1/me': { api: [{ method: 'GET', path: '/api/v1/me', expect: API_200 }] },
 	'/api/v1/organizations': {
@@ -107,6 +165,41 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 	},
 	'/api/v1/audit-events': {
 		api: [{ method: 'GET', path: '/api/v1/audit-events', expect: ADMIN_API }]
+	},
+	'/api/v1/openapi.json': {
+		api: [{ method: 'GET', path: '/api/v1/openapi.json', expect: API_200 }]
+	},
+	'/api/v1/calc/measure': {
+		api: [
+			{
+				method: 'POST',
+				path: '/api/v1/calc/measure',
+				body: {},
+				expect: { anonymous: 401, customer: 403, default: 400 }
+			}
+		]
+	},
+	'/api/v1/shipments': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments', expect: API_200 },
+			{ method: 'POST', path: '/api/v1/shipments', body: {}, expect: EDITOR_API }
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:ship', expect: API_200 },
+			{ method: 'GET', path: '/api/v1/shipments/:otherShip', expect: OTHER_SHIPMENT_API },
+			{ method: 'PATCH', path: '/api/v1/shipments/:ship', body: {}, expect: EDITOR_API }
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/lines': {
+		api: [{ method: 'PUT', path: '/api/v1/shipments/:ship/lines', body: {}, expect: EDITOR_API }]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/measure': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:ship/measure', expect: API_200 },
+			{ method: 'GET', path: '/api/v1/shipments/:otherShip/measure', expect: OTHER_SHIPMENT_API }
+		]
 	}
 };
 
@@ -161,7 +254,14 @@ test('every route in src/routes has access probes', () => {
 
 test.describe('access per role', () => {
 	const clients = new Map<Who, APIRequestContext>();
-	const ids = { own: new Map<Who, string>(), other: '', user: '' };
+	const ids = {
+		own: new Map<Who, string>(),
+		other: '',
+		user: '',
+		product: '',
+		ship: '',
+		otherShip: ''
+	};
 
 	test.beforeAll(async ({ baseURL }) => {
 		for (const who of WHO) {
@@ -183,6 +283,13 @@ test.describe('access per role', () => {
 		ids.other = users.find((u) => u.email === DEMO.otherCustomer)!.organizationId;
 		ids.user = users.find((u) => u.email === DEMO.coordinator)!.id;
 		expect(organizations.length).toBeGreaterThan(3);
+		const { rows } = (await (await admin.get('/api/v1/shipments?pageSize=200')).json()) as {
+			rows: { id: string; customerName: string }[];
+		};
+		ids.ship = rows.find((r) => r.customerName.startsWith('Hallvik'))!.id;
+		ids.otherShip = rows.find((r) => r.customerName.startsWith('Wattlebird'))!.id;
+		const productsPage = await admin.get('/products');
+		ids.product = /\/products\/([0-9a-f-]{36})/.exec(await productsPage.text())![1]!;
 	});
 
 	test.afterAll(async () => {
@@ -201,9 +308,12 @@ test.describe('access per role', () => {
 			const client = clients.get(who)!;
 			for (const probe of probes) {
 				const url = probe.path
+					.replace(':otherShip', ids.otherShip)
+					.replace(':ship', ids.ship)
 					.replace(':own', ids.own.get(who)!)
 					.replace(':other', ids.other)
-					.replace(':user', ids.user);
+					.replace(':user', ids.user)
+					.replace(':product', ids.product);
 				const response = await client.fetch(url, {
 					method: probe.method,
 					maxRedirects: 0,

@@ -2,12 +2,12 @@ import { expect, test } from '@playwright/test';
 import { DEMO, signInPage, submitSignIn } from './helpers';
 
 const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
-	admin: ['Overview', 'Organizations', 'People & access', 'Audit trail'],
-	coordinator: ['Overview', 'Organizations'],
-	finance: ['Overview', 'Organizations'],
-	broker: ['Overview', 'Our firm'],
-	customer: ['Overview', 'Our company'],
-	otherCustomer: ['Overview', 'Our company']
+	admin: ['Overview', 'Shipments', 'Products', 'Organizations', 'People & access', 'Audit trail'],
+	coordinator: ['Overview', 'Shipments', 'Products', 'Organizations'],
+	finance: ['Overview', 'Shipments', 'Products', 'Organizations'],
+	broker: ['Overview', 'Shipments', 'Products', 'Our firm'],
+	customer: ['Overview', 'Shipments', 'Our company'],
+	otherCustomer: ['Overview', 'Shipments', 'Our company']
 };
 
 test('an anonymous visitor is sent to the sign-in page', async ({ page }) => {

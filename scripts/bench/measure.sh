@@ -1,0 +1,122 @@
+#!/usr/bin/env bash
+# npm run bench:measure: performance figures against the issue's targets.
+#   Part A  measure() of a 500-line shipment, in-process (target: under 20 ms).
+#   Part B  the shipments list with 10,000 shipments, p95 at 10 concurrent requests on loopback
+#           (target: under 150 ms), on a throw-away PostgreSQL cluster and `node build`.
+# Prints figures and ratios; it is not a test and exits 0 even when a figure is over target.
+#
+# Usage: scripts/bench/measure.sh [all|a|b]      (default all)
+# Env:   BENCH_ITERATIONS (Part A runs per variant, default 200), BENCH_DURATION (s, default 10)
+set -euo pipefail
+# shellcheck source=scripts/lib.sh
+source "$(dirname -- "${BASH_SOURCE[0]}")/../lib.sh" # cd to the repo root; say, ensure_* helpers
+
+PARTS=${1:-all}
+[[ $PARTS =~ ^(all|a|b)$ ]] || {
+	echo "usage: scripts/bench/measure.sh [all|a|b]" >&2
+	exit 2
+}
+
+# Only the bench cluster, never demo or test: its own name, port and database.
+export LANDFALL_PG_NAME=bench
+export LANDFALL_PG_PORT=54350
+export LANDFALL_PG_DB=landfall_bench
+APP_HOST=127.0.0.1
+APP_PORT=4395
+BASE=http://$APP_HOST:$APP_PORT
+
+WORK=$(mktemp -d "${TMPDIR:-/tmp}/landfall-bench.XXXXXX")
+export BENCH_RESULTS=$WORK/results.tsv
+: >"$BENCH_RESULTS"
+APP_PID=""
+CLUSTER_STARTED=0
+
+cleanup() {
+	local code=$?
+	if [[ -n $APP_PID ]] && kill -0 "$APP_PID" 2>/dev/null; then
+		kill "$APP_PID" 2>/dev/null || true
+		for _ in 1 2 3 4 5 6 7 8 9 10; do
+			kill -0 "$APP_PID" 2>/dev/null || break
+			sleep 0.5
+		done
+		kill -9 "$APP_PID" 2>/dev/null || true
+		wait "$APP_PID" 2>/dev/null || true
+	fi
+	if ((CLUSTER_STARTED)); then bash scripts/pg.sh stop || true; fi
+	rm -rf -- "$WORK"
+	exit "$code"
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
+TSX=node_modules/.bin/tsx
+START=$SECONDS
+echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg) on $(nproc) CPUs (other work on the machine skews the figures)"
+
+# --- Part A ----------------------------------------------------------------------------------
+if [[ $PARTS != b ]]; then
+	say "Part A: measure() of a 500-line shipment, in-process"
+	"$TSX" scripts/bench/measure-cpu.ts "${BENCH_ITERATIONS:-200}"
+fi
+
+# --- Part B ----------------------------------------------------------------------------------
+if [[ $PARTS != a ]]; then
+	if timeout 2 bash -c ": <>/dev/tcp/$APP_HOST/$APP_PORT" 2>/dev/null; then
+		echo "port $APP_PORT on $APP_HOST is in use; stop what listens there first" >&2
+		exit 1
+	fi
+
+	say "Part B: fresh PostgreSQL cluster '$LANDFALL_PG_NAME' on port $LANDFALL_PG_PORT"
+	CLUSTER_STARTED=1
+	bash scripts/pg.sh reset
+	DATABASE_URL=$(bash scripts/pg.sh url)
+	export DATABASE_URL
+	"$TSX" scripts/migrate.ts
+	"$TSX" scripts/seed.ts
+
+	say "Inserting 10,000 shipments (3 lines each)"
+	t0=$SECONDS
+	bash scripts/pg.sh psql -X -q -v ON_ERROR_STOP=1 -f scripts/bench/seed-shipments.sql
+	echo "  (seeded in $((SECONDS - t0)) s)"
+
+	if [[ ! -f build/index.js ]] || [[ -n $(find src static data svelte.config.js vite.config.ts \
+		package-lock.json -newer build/index.js -type f -print -quit) ]]; then
+		say "Building the app (build/ is missing or older than its sources)"
+		node_modules/.bin/vite build --logLevel error
+	fi
+
+	say "Starting node build on $BASE"
+	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL \
+		AUTH_SECRET=bench-secret-0123456789abcdefghij NODE_ENV=production \
+		node build >"$WORK/app.log" 2>&1 &
+	APP_PID=$!
+	for ((i = 0; i < 120; i++)); do
+		curl -fsS --max-time 2 "$BASE/api/health" >/dev/null 2>&1 && break
+		kill -0 "$APP_PID" 2>/dev/null || break
+		sleep 0.5
+	done
+	if ! curl -fsS --max-time 2 "$BASE/api/health" >/dev/null 2>&1; then
+		echo "the app did not become healthy; its log:" >&2
+		tail -n 40 "$WORK/app.log" >&2 || true
+		exit 1
+	fi
+
+	BENCH_BASE=$BASE "$TSX" scripts/bench/list-http.ts
+
+	say "EXPLAIN ANALYZE of the list queries (after the load, so the cache is warm)"
+	bash scripts/pg.sh psql -X -q -v ON_ERROR_STOP=1 -f scripts/bench/explain.sql
+
+	if grep -qiE 'error|warn' "$WORK/app.log"; then
+		echo "--- app log (errors or warnings) ---"
+		grep -iE -m 20 'error|warn' "$WORK/app.log" || true
+	fi
+fi
+
+# --- Summary ---------------------------------------------------------------------------------
+say "Summary ($((SECONDS - START)) s; load average now: $(cut -d' ' -f1-3 /proc/loadavg), $(nproc) CPUs)"
+{
+	printf 'target\tgoal\tmeasured\tratio\tverdict\tbasis\n'
+	cat "$BENCH_RESULTS"
+} | awk -F'\t' '{ printf "  %-40s %-8s %-11s %-6s %-7s %s\n", $1, $2, $3, $4, $5, $6 }'
+echo "  ratio = measured / goal; PASS when under 1.00. 'n/a' means errors or non-2xx answers."

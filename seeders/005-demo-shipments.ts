@@ -1,0 +1,162 @@
+import type { Sequelize } from 'sequelize';
+import { loadSessionUser } from '../src/lib/server/auth/session-user';
+import {
+	ContainerTypeRow,
+	Organization,
+	Party,
+	Place,
+	Product,
+	Shipment,
+	User
+} from '../src/lib/server/db/models';
+import {
+	addContainer,
+	changeStatus,
+	createShipment,
+	replaceLines
+} from '../src/lib/server/services/shipments';
+import type { ShipmentStatus } from '../src/lib/trade/shipment-status';
+
+// A few demo shipments, created through the same services the app uses. Idempotent: each is
+// found again by its notes marker. Container numbers are invented but carry valid ISO 6346 digits.
+const DEMO = [
+	{
+		key: 'hallvik-speakers',
+		customer: 'Hallvik Heimtechnik GmbH',
+		broker: 'Kaaiman Customs Services B.V.',
+		consignee: 'Hallvik Heimtechnik GmbH — Distribution centre',
+		notify: 'Kaaiman Customs Services B.V.',
+		incoterm: 'FCA' as const,
+		incotermPlace: 'Port Klang',
+		origin: 'MYPKG',
+		destination: 'DEHAM',
+		modes: ['sea_fcl', 'sea_lcl', 'air'] as const,
+		chosen: 'sea_fcl' as const,
+		etdDays: 9,
+		transitDays: 28,
+		lines: [
+			['SLV-PBL-20', 1440],
+			['SLV-TWR-80', 60],
+			['SLV-PWR-20K', 900]
+		] as const,
+		status: ['booked'] as ShipmentStatus[],
+		containers: [{ number: 'CSQU3054383', type: 'C40HC', seal: 'SLV-0042117' }]
+	},
+	{
+		key: 'wattlebird-sensors',
+		customer: 'Wattlebird Home Retail Pty Ltd',
+		consignee: 'Wattlebird Home Retail Pty Ltd',
+		incoterm: 'CPT' as const,
+		incotermPlace: 'Melbourne',
+		origin: 'VNHAN',
+		destination: 'AUMEL',
+		modes: ['air', 'sea_lcl'] as const,
+		chosen: null,
+		etdDays: 20,
+		transitDays: 3,
+		lines: [
+			['SLV-SNS-TH1', 2400],
+			['SLV-SNS-DW2', 1800]
+		] as const,
+		status: [] as ShipmentStatus[],
+		containers: []
+	},
+	{
+		key: 'cedarpoint-mixed',
+		customer: 'Cedarpoint Living Inc.',
+		consignee: 'Cedarpoint Living Inc. — Receiving',
+		incoterm: 'FOB' as const,
+		incotermPlace: 'Penang',
+		origin: 'MYPEN',
+		destination: 'USNYC',
+		modes: ['sea_fcl'] as const,
+		chosen: 'sea_fcl' as const,
+		etdDays: -12,
+		transitDays: 30,
+		lines: [
+			['SLV-PBL-20', 2880],
+			['SLV-PWR-20K', 600]
+		] as const,
+		status: ['booked', 'documents_issued', 'in_transit'] as ShipmentStatus[],
+		containers: [{ number: 'LDFU1234567', type: 'C40GP', seal: 'SLV-0041980' }]
+	}
+];
+
+const day = (offset: number) =>
+	new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
+
+export async function seed(_sequelize: Sequelize): Promise<void> {
+	const coordinator = await User.findOne({
+		where: { email: 'coordinator@solvrae.example' },
+		rejectOnEmpty: true
+	});
+	const actor = (await loadSessionUser(coordinator.id))!;
+	const orgId = async (name: string) =>
+		(await Organization.findOne({ where: { name }, rejectOnEmpty: true })).id;
+	const partyId = async (name: string) =>
+		(await Party.findOne({ where: { name }, rejectOnEmpty: true })).id;
+	for (const demo of DEMO) {
+		const marker = `Demo scenario: ${demo.key}`;
+		if (await Shipment.findOne({ where: { notes: marker } })) continue;
+		const place = async (code: string) =>
+			(await Place.findOne({ where: { code }, rejectOnEmpty: true })).id;
+		const created = await createShipment(
+			actor,
+			{
+				customerId: await orgId(demo.customer),
+				brokerId: 'broker' in demo && demo.broker ? await orgId(demo.broker) : '',
+				consigneeId: await partyId(demo.consignee),
+				notifyPartyId: 'notify' in demo && demo.notify ? await partyId(demo.notify) : '',
+				incoterm: demo.incoterm,
+				incotermPlace: demo.incotermPlace,
+				originId: await place(demo.origin),
+				destinationId: await place(demo.destination),
+				modesConsidered: [...demo.modes],
+				chosenMode: demo.chosen ?? '',
+				currency: 'USD',
+				palletTypeId: '',
+				carrier: demo.chosen === 'sea_fcl' ? 'Meridian Blue Line (demo carrier)' : '',
+				vessel: '',
+				voyageOrFlight: '',
+				bookingNumber: '',
+				etd: day(demo.etdDays),
+				eta: day(demo.etdDays + demo.transitDays),
+				notes: marker,
+				version: 0
+			},
+			null
+		);
+		if (!created.ok) throw new Error(`demo shipment ${demo.key}: ${created.message}`);
+		const id = created.value.id;
+		let version = 0;
+		const lines = [];
+		for (const [sku, quantity] of demo.lines) {
+			const product = await Product.findOne({ where: { sku }, rejectOnEmpty: true });
+			lines.push({ productId: product.id, quantity, unitPrice: '' });
+		}
+		const saved = await replaceLines(actor, id, { lines, version: version++ }, null);
+		if (!saved.ok) throw new Error(`demo lines ${demo.key}: ${saved.message}`);
+		for (const container of demo.containers) {
+			const type = await ContainerTypeRow.findOne({
+				where: { code: container.type },
+				rejectOnEmpty: true
+			});
+			const added = await addContainer(
+				actor,
+				id,
+				{
+					containerNumber: container.number,
+					containerTypeId: type.id,
+					sealNumber: container.seal,
+					version: version++
+				},
+				null
+			);
+			if (!added.ok) throw new Error(`demo container ${demo.key}: ${added.message}`);
+		}
+		for (const to of demo.status) {
+			const changed = await changeStatus(actor, id, { to, note: '', version: version++ }, null);
+			if (!changed.ok) throw new Error(`demo status ${demo.key}: ${changed.message}`);
+		}
+	}
+}

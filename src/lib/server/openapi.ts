@@ -1,0 +1,134 @@
+import { z } from 'zod';
+import { measureInputSchema, measureResultSchema } from '../packing/schema';
+import { createUserSchema, updateUserSchema } from '../schemas/users';
+import { productSchema } from '../schemas/products';
+import { shipmentLinesSchema, shipmentListQuerySchema, shipmentSchema } from '../schemas/shipments';
+
+// The OpenAPI 3.1 document, generated from the same zod schemas that validate the requests.
+const schema = (s: z.ZodType) =>
+	z.toJSONSchema(s, { io: 'input', unrepresentable: 'any', target: 'draft-2020-12' });
+
+const error = {
+	description: 'Refused: `{ message, code, issues?: [{ path, message }] }`',
+	content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } }
+};
+const errors = { 400: error, 401: error, 403: error, 404: error, 409: error };
+const body = (ref: string) => ({
+	required: true,
+	content: { 'application/json': { schema: { $ref: `#/components/schemas/${ref}` } } }
+});
+const ok = (description: string, ref?: string) => ({
+	description,
+	content: { 'application/json': { schema: ref ? { $ref: `#/components/schemas/${ref}` } : {} } }
+});
+const idParam = (name: string) => ({
+	name,
+	in: 'path',
+	required: true,
+	schema: { type: 'string', format: 'uuid' }
+});
+
+export function openApiDocument(origin: string) {
+	const query = schema(shipmentListQuerySchema) as { properties: Record<string, object> };
+	return {
+		openapi: '3.1.0',
+		info: {
+			title: 'Landfall API',
+			version: '1',
+			description:
+				'Shipments, products and packing measures. Authenticate with the session cookie of a signed-in user. Customers see only their organization’s rows.'
+		},
+		servers: [{ url: `${origin}/api/v1` }],
+		paths: {
+			'/shipments': {
+				get: {
+					summary: 'List shipments (filtered, sorted, paged)',
+					parameters: Object.entries(query.properties).map(([name, s]) => ({
+						name,
+						in: 'query',
+						schema: s
+					})),
+					responses: { 200: ok('A page of shipments'), ...errors }
+				},
+				post: {
+					summary: 'Create a draft shipment',
+					requestBody: body('ShipmentHeader'),
+					responses: { 201: ok('Created: id and reference'), ...errors }
+				}
+			},
+			'/shipments/{shipmentId}': {
+				parameters: [idParam('shipmentId')],
+				get: { summary: 'Read a shipment', responses: { 200: ok('The shipment'), ...errors } },
+				patch: {
+					summary: 'Replace the header (send the version you read)',
+					requestBody: body('ShipmentHeader'),
+					responses: { 200: ok('The shipment'), ...errors }
+				}
+			},
+			'/shipments/{shipmentId}/lines': {
+				parameters: [idParam('shipmentId')],
+				put: {
+					summary: 'Replace all lines',
+					requestBody: body('ShipmentLines'),
+					responses: { 200: ok('The shipment'), ...errors }
+				}
+			},
+			'/shipments/{shipmentId}/measure': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Cartons, pallets, weights and chargeable weights',
+					responses: { 200: ok('Measure'), ...errors }
+				}
+			},
+			'/calc/measure': {
+				post: {
+					summary: 'Measure products and lines without storing anything',
+					requestBody: body('MeasureInput'),
+					responses: { 200: ok('Measure', 'MeasureResult'), ...errors }
+				}
+			},
+			'/users': {
+				get: { summary: 'List users (administrators)', responses: { 200: ok('Users'), ...errors } },
+				post: {
+					summary: 'Add a user (administrators)',
+					requestBody: body('CreateUser'),
+					responses: { 201: ok('The user'), ...errors }
+				}
+			},
+			'/users/{userId}': {
+				parameters: [idParam('userId')],
+				patch: {
+					summary: 'Change name, role or disabled (administrators)',
+					requestBody: body('UpdateUser'),
+					responses: { 200: ok('The user'), ...errors }
+				}
+			}
+		},
+		components: {
+			schemas: {
+				Error: {
+					type: 'object',
+					required: ['message'],
+					properties: {
+						message: { type: 'string' },
+						code: { type: 'string' },
+						issues: {
+							type: 'array',
+							items: {
+								type: 'object',
+								properties: { path: { type: 'string' }, message: { type: 'string' } }
+							}
+						}
+					}
+				},
+				ShipmentHeader: schema(shipmentSchema),
+				ShipmentLines: schema(shipmentLinesSchema),
+				MeasureInput: schema(measureInputSchema),
+				MeasureResult: schema(measureResultSchema),
+				Product: schema(productSchema),
+				CreateUser: schema(createUserSchema),
+				UpdateUser: schema(updateUserSchema)
+			}
+		}
+	};
+}
