@@ -652,7 +652,7 @@ describe('scoping of a Hallvik shipment', () => {
 		expect(await measureShipment(wattlebirdBuyer, hallvik.id)).toBeNull();
 	});
 
-	it('answers 404 to Wattlebird’s buyer for replaceLines, changeStatus and addContainer', async () => {
+	it('refuses Wattlebird’s buyer (403: customers never change shipments) for replaceLines, changeStatus and addContainer', async () => {
 		const version = await versionOf(hallvik.id);
 		const lines = refused(
 			await replaceLines(
@@ -662,7 +662,7 @@ describe('scoping of a Hallvik shipment', () => {
 				IP
 			)
 		);
-		expect(lines.status).toBe(404);
+		expect(lines.status).toBe(403);
 		const status = refused(
 			await changeStatus(
 				wattlebirdBuyer,
@@ -671,7 +671,7 @@ describe('scoping of a Hallvik shipment', () => {
 				IP
 			)
 		);
-		expect(status.status).toBe(404);
+		expect(status.status).toBe(403);
 		const container = refused(
 			await addContainer(
 				wattlebirdBuyer,
@@ -680,7 +680,7 @@ describe('scoping of a Hallvik shipment', () => {
 				IP
 			)
 		);
-		expect(container.status).toBe(404);
+		expect(container.status).toBe(403);
 		// Nothing changed.
 		expect(await versionOf(hallvik.id)).toBe(version);
 		expect(await statusOf(hallvik.id)).toBe('draft');

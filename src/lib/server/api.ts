@@ -32,7 +32,9 @@ export function respond<T>(result: ServiceResult<T>, status = 200): Response {
 	if (result.ok) return json(result.value, { status });
 	error(result.status, {
 		message: result.message,
-		code: result.status === 409 ? 'conflict' : result.status === 404 ? 'not_found' : 'invalid_body',
+		code:
+			{ 403: 'forbidden', 404: 'not_found', 409: 'conflict' }[result.status as 403] ??
+			'invalid_body',
 		issues: Object.entries(result.fieldErrors).map(([path, message]) => ({ path, message }))
 	});
 }

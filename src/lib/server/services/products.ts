@@ -1,5 +1,5 @@
 import Decimal from 'decimal.js';
-import { col, fn, Op, UniqueConstraintError, where } from 'sequelize';
+import { col, fn, Op, QueryTypes, UniqueConstraintError, where } from 'sequelize';
 import type { ProductInput } from '../../schemas/products';
 import { lbToKg, inchesToMm } from '../../packing/units';
 import type { SessionUser } from '../auth/session-user';
@@ -188,15 +188,21 @@ export async function saveProduct(
 			let product: Product | null;
 			let before: ProductRow | null = null;
 			if (id) {
+				// Lock the product row only (FOR UPDATE cannot lock the outer-joined packaging).
 				product = await Product.findByPk(id, {
 					include,
 					transaction,
-					lock: transaction.LOCK.UPDATE
+					lock: { level: transaction.LOCK.UPDATE, of: Product }
 				});
 				if (!product) return null;
-				if (product.version !== input.version) return 'conflict' as const;
 				before = toRow(product);
-				await product.update(productFields(input), { transaction });
+				// Optimistic lock in SQL, so a change to the packaging alone also bumps the version.
+				const [, bumped] = await Product.sequelize!.query(
+					'UPDATE products SET version = version + 1, updated_at = now() WHERE id = :id AND version = :version',
+					{ replacements: { id, version: input.version }, transaction, type: QueryTypes.UPDATE }
+				);
+				if (bumped !== 1) return 'conflict' as const;
+				await Product.update(productFields(input), { where: { id }, transaction, silent: true });
 			} else {
 				product = await Product.create(productFields(input), { transaction });
 			}

@@ -6,6 +6,7 @@ import type { SessionUser } from '../auth/session-user';
 import {
 	ContainerTypeRow,
 	Organization,
+	PalletTypeRow,
 	Party,
 	Place,
 	Product,
@@ -15,7 +16,7 @@ import {
 	ShipmentStatusEvent
 } from '../db/models';
 import { recordAudit } from './audit';
-import { shipmentScopeWhere } from './shipment-scope';
+import { canEditShipments, shipmentScopeWhere } from './shipment-scope';
 import type { ServiceResult } from './users';
 
 /** Header and lines may change only before the papers are issued. */
@@ -85,6 +86,9 @@ async function checkReferences(
 	for (const field of ['originId', 'destinationId'] as const) {
 		if (!(await Place.findByPk(input[field], { transaction }))) errors[field] = 'No such place.';
 	}
+	if (input.palletTypeId && !(await PalletTypeRow.findByPk(input.palletTypeId, { transaction }))) {
+		errors.palletTypeId = 'No such pallet type.';
+	}
 	return errors;
 }
 
@@ -124,6 +128,9 @@ async function run<T>(work: (t: Transaction) => Promise<T>): Promise<ServiceResu
 
 export async function createShipment(actor: SessionUser, input: ShipmentInput, ip: string | null) {
 	return run(async (transaction) => {
+		if (!canEditShipments(actor)) {
+			throw new Refused(refusal(403, 'Only coordinators and administrators create shipments.'));
+		}
 		const errors = await checkReferences(input, transaction);
 		if (Object.keys(errors).length)
 			throw new Refused(refusal(400, 'Check the highlighted fields.', errors));
@@ -162,6 +169,10 @@ export async function createShipment(actor: SessionUser, input: ShipmentInput, i
 }
 
 async function lockShipment(user: SessionUser, id: string, transaction: Transaction) {
+	// Routes check the role too; the service refuses on its own as well (defence in depth).
+	if (!canEditShipments(user)) {
+		throw new Refused(refusal(403, 'Only coordinators and administrators change shipments.'));
+	}
 	const shipment = await Shipment.findOne({
 		where: { [Op.and]: [{ id }, shipmentScopeWhere(user)] },
 		transaction,

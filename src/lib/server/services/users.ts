@@ -9,7 +9,7 @@ import { recordAudit } from './audit';
 export type FieldErrors = Record<string, string>;
 export type ServiceResult<T> =
 	| { ok: true; value: T }
-	| { ok: false; status: 400 | 404 | 409; message: string; fieldErrors: FieldErrors };
+	| { ok: false; status: 400 | 403 | 404 | 409; message: string; fieldErrors: FieldErrors };
 
 export interface UserRow {
 	id: string;

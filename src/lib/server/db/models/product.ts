@@ -33,6 +33,7 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
 	declare capacityAh: string | null;
 	declare cellsPerBattery: number | null;
 	declare batteriesPerUnit: number | null;
+	/** Optimistic lock, bumped in SQL by the products service on every save. */
 	declare version: CreationOptional<number>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
@@ -86,7 +87,7 @@ export function initProductModels(sequelize: Sequelize): void {
 			createdAt: DataTypes.DATE,
 			updatedAt: DataTypes.DATE
 		},
-		{ sequelize, tableName: 'products', version: true }
+		{ sequelize, tableName: 'products' }
 	);
 	ProductPackaging.init(
 		{

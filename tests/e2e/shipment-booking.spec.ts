@@ -1,0 +1,346 @@
+import { expect, test, type Browser, type Page } from '@playwright/test';
+import { DEMO, signInPage } from './helpers';
+
+// A coordinator books a shipment end to end in the browser: header, lines (typed and from a
+// CSV file) with live cartons and weights, status, containers, the list; plus bad input and two
+// editors saving the same shipment. The demo catalogue figures are in seeders/demo-catalogue.ts.
+
+const REFERENCE = /SHP-\d{4}-\d{5}/;
+const COORDINATOR_NAME = 'Daniel Tan Wei Jie';
+const PEBBLE = 'SLV-PBL-20 — Pebble 20 portable speaker, rechargeable, blue';
+const POWER_BANK = 'SLV-PWR-20K — Ridge 20000 mAh power bank, USB-C';
+const HUB = 'SLV-HUB-01 — Hearth smart-home hub, mains powered (packaging not yet measured)';
+
+const region = (page: Page, name: string) => page.getByRole('region', { name, exact: true });
+const linesRegion = (page: Page) => region(page, 'Lines');
+const measuresRegion = (page: Page) => region(page, 'Cartons, weights and chargeable weight');
+const statusRegion = (page: Page) => region(page, 'Status');
+const headerRegion = (page: Page) => region(page, 'Parties, terms and transport');
+const containersRegion = (page: Page) => region(page, 'Containers and seals');
+
+/** The value of the product option whose label starts with the SKU (options are "SKU — …"). */
+async function productValue(page: Page, line: number, label: string) {
+	const value = await linesRegion(page)
+		.getByLabel(`Product of line ${line}`)
+		.getByRole('option', { name: label, exact: true })
+		.getAttribute('value');
+	expect(value, `option ${label}`).toBeTruthy();
+	return value!;
+}
+
+/** Fills the new-shipment form as the brief's booking and submits it; returns the page's URL. */
+async function createDraftShipment(page: Page): Promise<{ url: string; reference: string }> {
+	await page.goto('/shipments');
+	await page.getByRole('link', { name: 'New shipment' }).click();
+	await expect(page.getByRole('heading', { level: 1, name: 'New shipment' })).toBeVisible();
+
+	await page.getByLabel('Customer (buyer)').selectOption({ label: 'Hallvik Heimtechnik GmbH' });
+	await page.getByLabel('Incoterms® 2020 rule').selectOption('FCA');
+	await page.getByLabel('Named place').fill('Port Klang');
+	await page.getByLabel('From', { exact: true }).selectOption({ label: 'MYPKG — Port Klang' });
+	await page.getByLabel('To', { exact: true }).selectOption({ label: 'DEHAM — Hamburg' });
+	await expect(page.getByLabel('Currency')).toHaveValue('USD');
+	await page.getByRole('button', { name: 'Create draft shipment' }).click();
+
+	await expect(page).toHaveURL(/\/shipments\/[0-9a-f-]{36}$/);
+	const heading = page.getByRole('heading', { level: 1 });
+	await expect(heading).toHaveText(REFERENCE);
+	return { url: page.url(), reference: (await heading.textContent())!.trim() };
+}
+
+/** Adds one line in the editor (not saved). */
+async function addLine(page: Page, line: number, product: string, quantity: string) {
+	const lines = linesRegion(page);
+	await lines.getByRole('button', { name: 'Add line' }).click();
+	await lines.getByLabel(`Product of line ${line}`).selectOption({ label: product });
+	await lines.getByLabel(`Quantity of line ${line}`).fill(quantity);
+}
+
+async function saveLines(page: Page) {
+	await linesRegion(page).getByRole('button', { name: 'Save lines' }).click();
+}
+
+async function signedInPage(browser: Browser) {
+	const context = await browser.newContext();
+	const page = await context.newPage();
+	await signInPage(page, DEMO.coordinator);
+	return { context, page };
+}
+
+test.describe.serial('booking one shipment from draft to booked', () => {
+	let shipment: { url: string; reference: string };
+
+	test.beforeEach(async ({ page }) => {
+		await signInPage(page, DEMO.coordinator);
+	});
+
+	test('a coordinator creates a draft shipment', async ({ page }) => {
+		shipment = await createDraftShipment(page);
+		await expect(
+			page.getByText('Hallvik Heimtechnik GmbH · MYPKG → DEHAM · FCA Port Klang')
+		).toBeVisible();
+		const status = statusRegion(page);
+		// The badge comes first, then the history's only entry.
+		await expect(status.getByText('Draft', { exact: true }).first()).toBeVisible();
+		await expect(status.getByRole('listitem')).toHaveCount(1);
+		await expect(status.getByRole('listitem')).toContainText(['Draft']);
+		await expect(status.getByRole('listitem')).toContainText([COORDINATOR_NAME]);
+		await expect(status.getByRole('button', { name: 'Mark booked' })).toBeVisible();
+		await expect(linesRegion(page).getByText('No lines yet.')).toBeVisible();
+	});
+
+	test('a typed line is measured live, then saved', async ({ page }) => {
+		await page.goto(shipment.url);
+		const measures = measuresRegion(page);
+		await expect(measures.getByText('Add lines to see the cartons and weights.')).toBeVisible();
+
+		// The totals come from the stateless measure API while the user types, not from a save.
+		const measured = page.waitForResponse(
+			(r) => r.url().endsWith('/api/v1/calc/measure') && r.request().method() === 'POST'
+		);
+		await addLine(page, 1, PEBBLE, '250');
+		expect((await measured).status()).toBe(200);
+		await expect(measures.getByTestId('total-units')).toHaveText('250');
+		// 250 = 20 full cartons of 12 + 1 with 10.
+		await expect(measures.getByTestId('total-cartons')).toHaveText('21');
+		// 20 × 8.640 kg + (1.200 kg tare + 10 × 0.62 kg) = 172.800 + 7.400.
+		await expect(measures.getByTestId('total-gross')).toHaveText('180.200 kg');
+		const perLine = measures.getByRole('table', { name: 'Cartons per line' });
+		await expect(perLine.getByRole('row', { name: /SLV-PBL-20/ })).toContainText(
+			'(20 full, 1 with 10)'
+		);
+		const lines = linesRegion(page);
+		await expect(lines.getByText('Unsaved changes')).toBeVisible();
+
+		await saveLines(page);
+		await expect(lines.getByRole('status')).toHaveText('1 line(s) saved.');
+		await expect(lines.getByText('Unsaved changes')).toBeHidden();
+
+		await page.reload();
+		const pebble = await productValue(page, 1, PEBBLE);
+		await expect(lines.getByLabel('Product of line 1')).toHaveValue(pebble);
+		await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('250');
+		await expect(lines.getByLabel('Product of line 2')).toHaveCount(0);
+		// After the reload the panel shows the stored shipment's measure.
+		await expect(measures.getByTestId('total-units')).toHaveText('250');
+		await expect(measures.getByTestId('total-cartons')).toHaveText('21');
+		await expect(measures.getByTestId('total-gross')).toHaveText('180.200 kg');
+	});
+
+	test('lines from a CSV file are previewed, added, then saved', async ({ page }) => {
+		await page.goto(shipment.url);
+		const lines = linesRegion(page);
+		await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('250');
+
+		await lines.getByText('Add lines from a CSV file').click();
+		await lines.getByLabel('CSV file').setInputFiles({
+			name: 'lines.csv',
+			mimeType: 'text/csv',
+			buffer: Buffer.from('sku,quantity,unit_price\nSLV-PWR-20K,60,16.90\nNOPE,5,\nSLV-PBL-20,0,\n')
+		});
+		const preview = lines.getByRole('table', { name: '1 of 3 rows can be added.' });
+		await expect(preview).toBeVisible();
+		await expect(preview.getByRole('row', { name: /SLV-PWR-20K/ })).toContainText('OK');
+		await expect(preview.getByRole('row', { name: /NOPE/ })).toContainText(
+			'No product with SKU “NOPE”.'
+		);
+		await expect(preview.getByRole('row', { name: /SLV-PBL-20/ })).toContainText(
+			'Quantity “0” must be a whole number of at least 1.'
+		);
+
+		await lines.getByRole('button', { name: 'Add 1 line' }).click();
+		await expect(preview).toBeHidden();
+		const powerBank = await productValue(page, 2, POWER_BANK);
+		await expect(lines.getByLabel('Product of line 2')).toHaveValue(powerBank);
+		await expect(lines.getByLabel('Quantity of line 2')).toHaveValue('60');
+		await expect(lines.getByLabel('Unit price of line 2')).toHaveValue('16.90');
+		await expect(lines.getByText('Unsaved changes')).toBeVisible();
+		// Live: 250 + 60 units; 21 + 2 cartons (60 = 2 full cartons of 30).
+		const measures = measuresRegion(page);
+		await expect(measures.getByTestId('total-units')).toHaveText('310');
+		await expect(measures.getByTestId('total-cartons')).toHaveText('23');
+
+		await saveLines(page);
+		await expect(lines.getByRole('status')).toHaveText('2 line(s) saved.');
+		await expect(lines.getByText('Unsaved changes')).toBeHidden();
+
+		await page.reload();
+		await expect(lines.getByLabel('Product of line 2')).toHaveValue(powerBank);
+		await expect(lines.getByLabel('Quantity of line 2')).toHaveValue('60');
+		await expect(lines.getByLabel('Unit price of line 2')).toHaveValue('16.9000');
+		await expect(measures.getByTestId('total-units')).toHaveText('310');
+		await expect(measures.getByTestId('total-cartons')).toHaveText('23');
+		// 180.200 kg + 2 × 12.900 kg.
+		await expect(measures.getByTestId('total-gross')).toHaveText('206.000 kg');
+	});
+
+	test('booking needs a chosen mode; with one it is booked by the coordinator', async ({
+		page
+	}) => {
+		await page.goto(shipment.url);
+		const status = statusRegion(page);
+		await status.getByRole('button', { name: 'Mark booked' }).click();
+		await expect(status.getByRole('alert')).toContainText('the chosen mode');
+		await expect(status.getByText('Draft', { exact: true }).first()).toBeVisible();
+
+		const header = headerRegion(page);
+		await expect(header.getByRole('checkbox', { name: 'Sea, full container' })).toBeChecked();
+		await header.getByLabel('Chosen mode').selectOption({ label: 'Sea, full container' });
+		await header.getByRole('button', { name: 'Save shipment' }).click();
+		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
+		await expect(page.getByText(/· Sea, full container$/)).toBeVisible();
+
+		await status.getByRole('button', { name: 'Mark booked' }).click();
+		await expect(status.getByText('Booked', { exact: true }).first()).toBeVisible();
+		await expect(status.getByRole('alert')).toHaveCount(0);
+		const booked = status.getByRole('listitem').filter({ hasText: 'Booked' });
+		await expect(booked).toHaveCount(1);
+		await expect(booked).toContainText(COORDINATOR_NAME);
+		await expect(status.getByRole('listitem')).toHaveCount(2);
+		await expect(status.getByRole('button', { name: 'Mark documents issued' })).toBeVisible();
+
+		await page.reload();
+		await expect(status.getByText('Booked', { exact: true }).first()).toBeVisible();
+		await expect(headerRegion(page).getByLabel('Chosen mode')).toHaveValue('sea_fcl');
+	});
+
+	test('a container number with a wrong check digit is refused; a right one is listed', async ({
+		page
+	}) => {
+		await page.goto(shipment.url);
+		const containers = containersRegion(page);
+		await expect(containers.getByText('None recorded.')).toBeVisible();
+		const number = containers.getByLabel('Container number (ISO 6346)');
+
+		await number.fill('CSQU 305438 4');
+		await containers.getByRole('button', { name: 'Add container' }).click();
+		await expect(containers.getByText('The check digit should be 3, not 4.')).toBeVisible();
+		await expect(number).toHaveAttribute('aria-invalid', 'true');
+		await expect(containers.getByRole('listitem')).toHaveCount(0);
+
+		await number.fill('CSQU3054383');
+		await containers.getByLabel('Seal number').fill('TEST-1');
+		await containers.getByRole('button', { name: 'Add container' }).click();
+		await expect(containers.getByRole('status')).toHaveText('Container CSQU3054383 added.');
+		const listed = containers.getByRole('listitem').filter({ hasText: 'CSQU 305438 3' });
+		await expect(listed).toHaveCount(1);
+		await expect(listed).toContainText('seal TEST-1');
+		await expect(containers.getByText('The check digit should be 3, not 4.')).toBeHidden();
+		await expect(number).toHaveValue('');
+
+		await page.reload();
+		await expect(
+			containersRegion(page).getByRole('listitem').filter({ hasText: 'CSQU 305438 3' })
+		).toContainText('seal TEST-1');
+	});
+
+	test('the list filters by status and sorts by reference', async ({ page }) => {
+		await page.goto('/shipments');
+		await page.getByLabel('Status').selectOption({ label: 'Booked' });
+		await page.getByRole('button', { name: 'Filter' }).click();
+		await expect(page).toHaveURL(/[?&]status=booked(&|$)/);
+
+		const table = page.getByRole('table');
+		const ours = table.getByRole('row').filter({
+			has: page.getByRole('link', { name: shipment.reference, exact: true })
+		});
+		await expect(ours).toHaveCount(1);
+		await expect(ours).toContainText('Booked');
+		await expect(ours).toContainText('Hallvik Heimtechnik GmbH');
+		await expect(ours).toContainText('MYPKG → DEHAM');
+		await expect(ours).toContainText('Sea, full container');
+		// Only booked shipments are listed.
+		const statusCells = table
+			.getByRole('row')
+			.filter({ has: page.getByRole('link', { name: REFERENCE }) });
+		for (const row of await statusCells.all()) await expect(row).toContainText('Booked');
+
+		const references = table.getByRole('link', { name: REFERENCE });
+		const referenceHeader = table.getByRole('columnheader', { name: 'Reference' });
+		await referenceHeader.getByRole('link', { name: 'Reference' }).click();
+		await expect(referenceHeader).toHaveAttribute('aria-sort', 'ascending');
+		await expect(page).toHaveURL(/[?&]status=booked(&|$)/);
+		const ascending = await references.allTextContents();
+		expect(ascending.length).toBeGreaterThanOrEqual(2);
+		expect(ascending).toContain(shipment.reference);
+		expect(ascending).toEqual([...ascending].sort());
+
+		await referenceHeader.getByRole('link', { name: 'Reference' }).click();
+		await expect(referenceHeader).toHaveAttribute('aria-sort', 'descending');
+		await expect(references.first()).toHaveText(ascending.at(-1)!);
+		expect(await references.allTextContents()).toEqual([...ascending].reverse());
+	});
+});
+
+test('bad lines: a zero quantity and a product without packaging', async ({ page }) => {
+	await signInPage(page, DEMO.coordinator);
+	await createDraftShipment(page);
+	const lines = linesRegion(page);
+	const measures = measuresRegion(page);
+
+	await addLine(page, 1, PEBBLE, '0');
+	await saveLines(page);
+	const quantity = lines.getByLabel('Quantity of line 1');
+	await expect(quantity).toHaveAttribute('aria-invalid', 'true');
+	// The error sits in the quantity's own cell (a `has` locator is relative to the row).
+	const cell = lines
+		.getByRole('cell')
+		.filter({ has: page.getByRole('spinbutton', { name: 'Quantity of line 1' }) });
+	const row = lines
+		.getByRole('row')
+		.filter({ has: page.getByRole('spinbutton', { name: 'Quantity of line 1' }) });
+	await expect(cell.getByText('Quantity must be at least 1.')).toBeVisible();
+	await expect(lines.getByRole('status')).toHaveCount(0);
+	// Nothing was saved.
+	await expect(lines.getByText('Unsaved changes')).toBeVisible();
+
+	await lines.getByLabel('Product of line 1').selectOption({ label: HUB });
+	await quantity.fill('5');
+	await expect(
+		row.getByText('This product has no packaging yet: it cannot be measured.')
+	).toBeVisible();
+	const problem = measures.getByRole('alert');
+	await expect(problem).toContainText('These lines cannot be measured yet:');
+	await expect(problem).toContainText('Product “SLV-HUB-01” has no packaging');
+	await expect(measures.getByTestId('total-units')).toHaveCount(0);
+
+	await page.reload();
+	await expect(linesRegion(page).getByText('No lines yet.')).toBeVisible();
+});
+
+test('two editors: the second save of the same shipment is refused, not written', async ({
+	browser
+}) => {
+	const a = await signedInPage(browser);
+	const b = await signedInPage(browser);
+	try {
+		const { url } = await createDraftShipment(a.page);
+		await b.page.goto(url);
+		await expect(linesRegion(b.page).getByText('No lines yet.')).toBeVisible();
+
+		await addLine(a.page, 1, PEBBLE, '24');
+		await saveLines(a.page);
+		await expect(linesRegion(a.page).getByRole('status')).toHaveText('1 line(s) saved.');
+
+		await addLine(b.page, 1, POWER_BANK, '90');
+		await saveLines(b.page);
+		const refusal = linesRegion(b.page).getByRole('alert');
+		await expect(refusal).toContainText('Someone else changed this shipment');
+		await expect(linesRegion(b.page).getByRole('status')).toHaveCount(0);
+
+		// A's line stands; B's was not written.
+		for (const page of [a.page, b.page]) {
+			await page.reload();
+			const lines = linesRegion(page);
+			await expect(lines.getByLabel('Product of line 1')).toHaveValue(
+				await productValue(page, 1, PEBBLE)
+			);
+			await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('24');
+			await expect(lines.getByLabel('Product of line 2')).toHaveCount(0);
+			await expect(measuresRegion(page).getByTestId('total-units')).toHaveText('24');
+		}
+	} finally {
+		await a.context.close();
+		await b.context.close();
+	}
+});
