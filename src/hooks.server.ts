@@ -4,6 +4,7 @@ import { authHandle } from '$lib/server/auth';
 import { isApiPath, requireUser } from '$lib/server/auth/guard';
 import { loadSessionUser } from '$lib/server/auth/session-user';
 import { db } from '$lib/server/db';
+import { userForToken } from '$lib/server/services/api-tokens';
 
 /** Pages and endpoints anyone may reach. Everything else needs a session. */
 const PUBLIC_PATHS = new Set(['/signin', '/api/health']);
@@ -21,6 +22,18 @@ const closeAuthEndpoints: Handle = ({ event, resolve }) =>
 
 const loadUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
+	const bearer = /^Bearer (\S+)$/.exec(event.request.headers.get('authorization') ?? '')?.[1];
+	if (bearer && event.url.pathname.startsWith('/api/v1/')) {
+		// Integrations: an API token stands for its user on the JSON API only, never on pages.
+		event.locals.user = await userForToken(bearer);
+		if (!event.locals.user) {
+			return json(
+				{ message: 'This API token is unknown or revoked.', code: 'invalid_token' },
+				{ status: 401 }
+			);
+		}
+		return resolve(event);
+	}
 	const session = await event.locals.auth();
 	if (session?.user?.id) event.locals.user = await loadSessionUser(session.user.id);
 	return resolve(event);

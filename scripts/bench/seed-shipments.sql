@@ -106,7 +106,7 @@ ON CONFLICT (exporter_id, year) DO UPDATE SET last_value = GREATEST(shipment_ref
 
 COMMIT;
 
-ANALYZE;
+ANALYZE organizations, places, products, users, shipments, shipment_lines;
 
 SELECT (SELECT count(*) FROM shipments) AS shipments,
        (SELECT count(*) FROM shipment_lines) AS lines,

@@ -79,6 +79,18 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/admin/users/:user?/save',
 				form: { name: '' },
 				expect: { anonymous: 303, admin: 400, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/admin/users/:user?/issueToken',
+				form: { name: '' },
+				expect: { anonymous: 303, admin: 400, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/admin/users/:user?/revokeToken',
+				form: { tokenId: 'x' },
+				expect: { anonymous: 303, admin: 400, default: 403 }
 			}
 		]
 	},

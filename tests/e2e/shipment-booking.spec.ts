@@ -18,7 +18,7 @@ const statusRegion = (page: Page) => region(page, 'Status');
 const headerRegion = (page: Page) => region(page, 'Parties, terms and transport');
 const containersRegion = (page: Page) => region(page, 'Containers and seals');
 
-/** The value of the product option whose label starts with the SKU (options are "SKU — …"). */
+/** The value (product id) of the option with this label in a line's product select. */
 async function productValue(page: Page, line: number, label: string) {
 	const value = await linesRegion(page)
 		.getByLabel(`Product of line ${line}`)
@@ -67,7 +67,9 @@ async function signedInPage(browser: Browser) {
 	return { context, page };
 }
 
-test.describe.serial('booking one shipment from draft to booked', () => {
+test.describe('booking one shipment from draft to booked', () => {
+	// Each step works on the shipment the first one created.
+	test.describe.configure({ mode: 'serial', timeout: 60_000 });
 	let shipment: { url: string; reference: string };
 
 	test.beforeEach(async ({ page }) => {
@@ -250,10 +252,10 @@ test.describe.serial('booking one shipment from draft to booked', () => {
 		await expect(ours).toContainText('MYPKG → DEHAM');
 		await expect(ours).toContainText('Sea, full container');
 		// Only booked shipments are listed.
-		const statusCells = table
+		const listed = table
 			.getByRole('row')
 			.filter({ has: page.getByRole('link', { name: REFERENCE }) });
-		for (const row of await statusCells.all()) await expect(row).toContainText('Booked');
+		for (const row of await listed.all()) await expect(row).toContainText('Booked');
 
 		const references = table.getByRole('link', { name: REFERENCE });
 		const referenceHeader = table.getByRole('columnheader', { name: 'Reference' });
@@ -311,6 +313,7 @@ test('bad lines: a zero quantity and a product without packaging', async ({ page
 test('two editors: the second save of the same shipment is refused, not written', async ({
 	browser
 }) => {
+	test.setTimeout(60_000);
 	const a = await signedInPage(browser);
 	const b = await signedInPage(browser);
 	try {
@@ -343,4 +346,52 @@ test('two editors: the second save of the same shipment is refused, not written'
 		await a.context.close();
 		await b.context.close();
 	}
+});
+
+// Known app bugs, reported to the lead. Each is marked test.fail(): it passes while the bug is
+// there and turns red once the bug is fixed, as a reminder to drop the annotation.
+test.describe('known bugs', () => {
+	test.beforeEach(async ({ page }) => {
+		await signInPage(page, DEMO.coordinator);
+		await createDraftShipment(page);
+	});
+
+	test('saving the lines twice without reloading is not taken for a conflict', async ({ page }) => {
+		test.fail(true, 'the lines form keeps the version it posted, so its next save gets a 409');
+		const lines = linesRegion(page);
+		await addLine(page, 1, PEBBLE, '12');
+		await saveLines(page);
+		await expect(lines.getByRole('status')).toHaveText('1 line(s) saved.');
+		await lines.getByLabel('Quantity of line 1').fill('24');
+		await saveLines(page);
+		await expect(lines.getByRole('alert')).toHaveCount(0);
+		await expect(lines.getByRole('status')).toHaveText('1 line(s) saved.');
+	});
+
+	test('saving the header twice without reloading is not taken for a conflict', async ({
+		page
+	}) => {
+		test.fail(true, 'the header form keeps the version it posted, so its next save gets a 409');
+		const header = headerRegion(page);
+		await header.getByLabel('Chosen mode').selectOption({ label: 'Air' });
+		await header.getByRole('button', { name: 'Save shipment' }).click();
+		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
+		await header.getByLabel('Carrier').fill('Demo Air Cargo');
+		await header.getByRole('button', { name: 'Save shipment' }).click();
+		await expect(header.getByRole('alert')).toHaveCount(0);
+		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
+	});
+
+	test('removing every line in the editor empties the live totals', async ({ page }) => {
+		test.fail(true, 'the panel falls back to the stored measure when the live one is empty');
+		const lines = linesRegion(page);
+		const measures = measuresRegion(page);
+		await addLine(page, 1, PEBBLE, '12');
+		await saveLines(page);
+		await expect(lines.getByRole('status')).toHaveText('1 line(s) saved.');
+		await expect(measures.getByTestId('total-units')).toHaveText('12');
+		await lines.getByRole('button', { name: 'Remove line 1' }).click();
+		await expect(lines.getByText('No lines yet.')).toBeVisible();
+		await expect(measures.getByText('Add lines to see the cartons and weights.')).toBeVisible();
+	});
 });

@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { initApiTokenModel } from './api-token';
 import { initAuditModels } from './audit-event';
 import {
 	Organization,
@@ -18,6 +19,7 @@ import {
 } from './shipment';
 import { User, initUserModel } from './user';
 
+export * from './api-token';
 export * from './audit-event';
 export * from './equipment';
 export * from './organization';
@@ -36,6 +38,7 @@ export function initModels(sequelize: Sequelize): void {
 	initOrganizationModels(sequelize);
 	initUserModel(sequelize);
 	initAuditModels(sequelize);
+	initApiTokenModel(sequelize);
 	initEquipmentModels(sequelize);
 	initPlaceModels(sequelize);
 	initProductModels(sequelize);

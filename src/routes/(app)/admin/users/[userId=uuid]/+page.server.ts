@@ -2,11 +2,12 @@ import { error, fail } from '@sveltejs/kit';
 import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guard';
+import { issueToken, listTokens, revokeToken } from '$lib/server/services/api-tokens';
 import { getUser, updateUser } from '$lib/server/services/users';
 import { updateUserSchema } from '$lib/schemas/users';
 import type { Actions, PageServerLoad } from './$types';
 
-// Returns: person (the user being edited), form (name, role, disabled, version).
+// Returns: person (the user being edited), form (name, role, disabled, version), tokens (API).
 export const load: PageServerLoad = async (event) => {
 	requireRole(event, 'admin');
 	const person = await getUser(event.params.userId);
@@ -15,7 +16,7 @@ export const load: PageServerLoad = async (event) => {
 		{ name: person.name, role: person.role, disabled: person.disabled, version: person.version },
 		zod4(updateUserSchema)
 	);
-	return { person, form };
+	return { person, form, tokens: await listTokens(person.id) };
 };
 
 export const actions: Actions = {
@@ -38,5 +39,23 @@ export const actions: Actions = {
 		}
 		form.data.version = result.value.version;
 		return message(form, { tone: 'ok', text: 'Saved.' });
+	},
+	issueToken: async (event) => {
+		const admin = requireRole(event, 'admin');
+		const name = String((await event.request.formData()).get('name') ?? '').trim();
+		if (name.length < 1 || name.length > 80) {
+			return fail(400, { tokenError: 'Name the token (1 to 80 characters), e.g. “ERP export”.' });
+		}
+		const result = await issueToken(admin, event.params.userId, name, event.getClientAddress());
+		if (!result.ok) return fail(result.status, { tokenError: result.message });
+		return { issued: { name, token: result.value.token } };
+	},
+	revokeToken: async (event) => {
+		const admin = requireRole(event, 'admin');
+		const tokenId = String((await event.request.formData()).get('tokenId') ?? '');
+		if (!/^[0-9a-f-]{36}$/i.test(tokenId)) return fail(400, { tokenError: 'No such token.' });
+		const result = await revokeToken(admin, event.params.userId, tokenId, event.getClientAddress());
+		if (!result.ok) return fail(result.status, { tokenError: result.message });
+		return { revoked: result.value.name };
 	}
 };
