@@ -115,3 +115,47 @@ export const shipmentListQuerySchema = z.object({
 	pageSize: z.coerce.number().int().min(1).max(200).default(25)
 });
 export type ShipmentListQuery = z.infer<typeof shipmentListQuerySchema>;
+
+/** One lot (and optionally a serial-number range) packed in a carton range of the shipment. */
+export const lotSchema = z
+	.object({
+		productId: z.uuid({ error: 'Choose the product.' }),
+		cartonFrom: positiveInt('First carton', 1_000_000),
+		cartonTo: positiveInt('Last carton', 1_000_000),
+		lotNumber: z.string().trim().min(1, 'Enter the lot number.').max(40),
+		serialFrom: shortText('First serial number', 40),
+		serialTo: shortText('Last serial number', 40),
+		version: z.number().int().min(0)
+	})
+	.superRefine((lot, ctx) => {
+		if (lot.cartonTo < lot.cartonFrom) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['cartonTo'],
+				message: 'The last carton comes before the first.'
+			});
+		}
+		if (Boolean(lot.serialFrom) !== Boolean(lot.serialTo)) {
+			const path = lot.serialFrom ? 'serialTo' : 'serialFrom';
+			ctx.addIssue({
+				code: 'custom',
+				path: [path],
+				message: 'Give both ends of the serial range, or neither.'
+			});
+		} else if (lot.serialFrom && lot.serialTo) {
+			if (lot.serialFrom.length !== lot.serialTo.length) {
+				ctx.addIssue({
+					code: 'custom',
+					path: ['serialTo'],
+					message: 'Both serial numbers need the same length, e.g. PB20-000001 to PB20-000500.'
+				});
+			} else if (lot.serialFrom > lot.serialTo) {
+				ctx.addIssue({
+					code: 'custom',
+					path: ['serialTo'],
+					message: 'The last serial number comes before the first.'
+				});
+			}
+		}
+	});
+export type LotInput = z.infer<typeof lotSchema>;

@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import { addLot, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
 import { canEditShipments } from '$lib/server/services/shipment-scope';
@@ -17,6 +18,7 @@ import {
 } from '$lib/server/services/shipments';
 import {
 	containerSchema,
+	lotSchema,
 	shipmentLinesSchema,
 	shipmentSchema,
 	statusChangeSchema
@@ -61,7 +63,7 @@ export const load: PageServerLoad = async (event) => {
 		quantity: l.quantity,
 		unitPrice: l.unitPrice
 	}));
-	const [headerForm, linesForm, containerForm] = await Promise.all([
+	const [headerForm, linesForm, containerForm, lotForm, lots] = await Promise.all([
 		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
 		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
 			errors: false,
@@ -70,7 +72,9 @@ export const load: PageServerLoad = async (event) => {
 		superValidate({ version: shipment.version }, zod4(containerSchema), {
 			errors: false,
 			id: 'container'
-		})
+		}),
+		superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
+		listLots(shipment.id)
 	]);
 	return {
 		shipment,
@@ -81,7 +85,9 @@ export const load: PageServerLoad = async (event) => {
 		options: options && { ...options, currencies: countryAndCurrencyOptions().currencies },
 		headerForm,
 		linesForm,
-		containerForm
+		containerForm,
+		lotForm,
+		lots
 	};
 };
 
@@ -163,5 +169,22 @@ export const actions: Actions = {
 		);
 		if (!result.ok) return fail(result.status, { removeError: result.message });
 		return { removed: true };
+	},
+	addLot: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(lotSchema), { id: 'lot' });
+		if (!form.valid) return fail(400, { form });
+		const result = await addLot(user, event.params.shipmentId, form.data, event.getClientAddress());
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: `Lot ${form.data.lotNumber} recorded.` });
+	},
+	removeLot: async (event) => {
+		const user = editor(event);
+		const lotId = String((await event.request.formData()).get('lotId') ?? '');
+		if (!/^[0-9a-f-]{36}$/i.test(lotId))
+			return fail(400, { lotError: 'That lot could not be identified.' });
+		const result = await removeLot(user, event.params.shipmentId, lotId, event.getClientAddress());
+		if (!result.ok) return fail(result.status, { lotError: result.message });
+		return { lotRemoved: true };
 	}
 };
