@@ -15,6 +15,7 @@ import {
 	createShipment,
 	replaceLines
 } from '../src/lib/server/services/shipments';
+import { addLot } from '../src/lib/server/services/shipment-lots';
 import type { ShipmentStatus } from '../src/lib/trade/shipment-status';
 
 // A few demo shipments, created through the same services the app uses. Idempotent: each is
@@ -40,7 +41,25 @@ const DEMO = [
 			['SLV-PWR-20K', 900]
 		] as const,
 		status: ['booked'] as ShipmentStatus[],
-		containers: [{ number: 'CSQU3054383', type: 'C40HC', seal: 'SLV-0042117' }]
+		containers: [{ number: 'CSQU3054383', type: 'C40HC', seal: 'SLV-0042117' }],
+		lots: [
+			{
+				sku: 'SLV-PBL-20',
+				cartonFrom: 1,
+				cartonTo: 60,
+				lotNumber: 'PB20-2611-A',
+				serialFrom: 'PB20-000001',
+				serialTo: 'PB20-000720'
+			},
+			{
+				sku: 'SLV-PBL-20',
+				cartonFrom: 61,
+				cartonTo: 120,
+				lotNumber: 'PB20-2611-B',
+				serialFrom: 'PB20-000721',
+				serialTo: 'PB20-001440'
+			}
+		]
 	},
 	{
 		key: 'wattlebird-sensors',
@@ -136,6 +155,11 @@ export async function seed(_sequelize: Sequelize): Promise<void> {
 		}
 		const saved = await replaceLines(actor, id, { lines, version: version++ }, null);
 		if (!saved.ok) throw new Error(`demo lines ${demo.key}: ${saved.message}`);
+		for (const lot of ('lots' in demo && demo.lots) || []) {
+			const product = await Product.findOne({ where: { sku: lot.sku }, rejectOnEmpty: true });
+			const added = await addLot(actor, id, { ...lot, productId: product.id, version }, null);
+			if (!added.ok) throw new Error(`demo lot ${demo.key}: ${added.message}`);
+		}
 		for (const container of demo.containers) {
 			const type = await ContainerTypeRow.findOne({
 				where: { code: container.type },

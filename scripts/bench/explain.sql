@@ -46,7 +46,7 @@ SELECT count(*)::int AS total FROM shipments s WHERE TRUE AND s.status = 'booked
 -- runs in a transaction that is rolled back, so the bench database is left as the app made it.
 \echo '-- what-if A: as the app, plus CREATE INDEX (created_at DESC NULLS LAST, id DESC)'
 BEGIN;
-CREATE INDEX bench_whatif_created_idx ON shipments (created_at DESC NULLS LAST, id DESC);
+CREATE INDEX IF NOT EXISTS bench_whatif_created_idx ON shipments (created_at DESC NULLS LAST, id DESC);
 EXPLAIN (ANALYZE, COSTS OFF)
 SELECT s.id, s.reference, s.status, c.name AS "customerName", o.code AS "originCode",
        d.code AS "destinationCode", s.chosen_mode AS "chosenMode",

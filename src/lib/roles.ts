@@ -52,19 +52,27 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 	const overview = { href: '/', label: 'Overview' };
 	const shipments = { href: '/shipments', label: 'Shipments' };
 	const products = { href: '/products', label: 'Products' };
+	const trace = { href: '/trace', label: 'Trace a serial' };
 	switch (role) {
 		case 'admin':
 			return [
 				overview,
 				shipments,
 				products,
+				trace,
 				{ href: '/organizations', label: 'Organizations' },
 				{ href: '/admin/users', label: 'People & access' },
 				{ href: '/admin/audit', label: 'Audit trail' }
 			];
 		case 'coordinator':
 		case 'finance':
-			return [overview, shipments, products, { href: '/organizations', label: 'Organizations' }];
+			return [
+				overview,
+				shipments,
+				products,
+				trace,
+				{ href: '/organizations', label: 'Organizations' }
+			];
 		case 'broker':
 			return [
 				overview,

@@ -49,3 +49,25 @@ test('the pages a customer sees, and the 403 page', async ({ page }) => {
 	await page.goto('/organizations');
 	await expectAccessible(page, '403 page');
 });
+
+test('the pages a coordinator works in', async ({ page }) => {
+	test.setTimeout(120_000);
+	await signInPage(page, DEMO.coordinator);
+	for (const path of [
+		'/shipments',
+		'/shipments/new',
+		'/products',
+		'/products/new',
+		'/trace?q=PB20-000100'
+	]) {
+		await page.goto(path);
+		await expectAccessible(page, path);
+	}
+	await page.goto('/shipments');
+	await page.getByRole('link', { name: /^SHP-/ }).first().click();
+	await expect(page.getByRole('heading', { name: /^SHP-/ })).toBeVisible();
+	await expectAccessible(page, 'shipment detail');
+	await page.goto('/products');
+	await page.getByRole('link', { name: 'SLV-PBL-20' }).click();
+	await expectAccessible(page, 'product detail');
+});

@@ -107,6 +107,7 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 		]
 	},
 	'/shipments': { page: [{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 }] },
+	'/trace': { page: [{ method: 'GET', path: '/trace?q=PB20-000001', expect: STAFF_PAGE }] },
 	'/shipments/new': {
 		page: [{ method: 'GET', path: '/shipments/new', expect: EDITOR_PAGE }],
 		actions: [
@@ -138,6 +139,18 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				method: 'POST',
 				path: '/shipments/:ship?/removeContainer',
 				form: { containerId: 'x' },
+				expect: EDITOR_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/addLot',
+				form: { lotNumber: '' },
+				expect: EDITOR_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/removeLot',
+				form: { lotId: 'x' },
 				expect: EDITOR_ACTION
 			}
 		]

@@ -2,9 +2,17 @@ import { expect, test } from '@playwright/test';
 import { DEMO, signInPage, submitSignIn } from './helpers';
 
 const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
-	admin: ['Overview', 'Shipments', 'Products', 'Organizations', 'People & access', 'Audit trail'],
-	coordinator: ['Overview', 'Shipments', 'Products', 'Organizations'],
-	finance: ['Overview', 'Shipments', 'Products', 'Organizations'],
+	admin: [
+		'Overview',
+		'Shipments',
+		'Products',
+		'Trace a serial',
+		'Organizations',
+		'People & access',
+		'Audit trail'
+	],
+	coordinator: ['Overview', 'Shipments', 'Products', 'Trace a serial', 'Organizations'],
+	finance: ['Overview', 'Shipments', 'Products', 'Trace a serial', 'Organizations'],
 	broker: ['Overview', 'Shipments', 'Products', 'Our firm'],
 	customer: ['Overview', 'Shipments', 'Our company'],
 	otherCustomer: ['Overview', 'Shipments', 'Our company']
