@@ -54,11 +54,12 @@ trap 'exit 130' INT TERM
 TSX=node_modules/.bin/tsx
 START=$SECONDS
 # Figures are only worth comparing on an otherwise idle machine: say so when it is not.
+# After the run the load is mostly our own, so only the "before" figure warns.
 check_load() {
 	local load1
 	load1=$(cut -d' ' -f1 /proc/loadavg)
 	echo "load average $1: $(cut -d' ' -f1-3 /proc/loadavg) on $(nproc) CPUs"
-	if awk -v l="$load1" -v n="$(nproc)" 'BEGIN { exit !(l > n * 0.75) }'; then
+	if [[ $1 == before ]] && awk -v l="$load1" -v n="$(nproc)" 'BEGIN { exit !(l > n * 0.75) }'; then
 		echo "WARNING: the machine is busy with other work; these figures are inflated by it." >&2
 	fi
 }
