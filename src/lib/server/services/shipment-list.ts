@@ -20,6 +20,7 @@ export interface ShipmentListRow {
 	createdAt: string;
 }
 
+// Only etd can be null; the other sort columns then match their indexes' order exactly.
 const ORDER: Record<ShipmentListQuery['sort'], string> = {
 	reference: 's.reference',
 	etd: 's.etd',
@@ -71,7 +72,7 @@ export async function listShipments(user: SessionUser, query: ShipmentListQuery)
 		   JOIN places o ON o.id = s.origin_id
 		   JOIN places d ON d.id = s.destination_id
 		  WHERE ${where}
-		  ORDER BY ${ORDER[query.sort]} ${direction} NULLS LAST, s.id ${direction}
+		  ORDER BY ${ORDER[query.sort]} ${direction}${query.sort === 'etd' ? ' NULLS LAST' : ''}, s.id ${direction}
 		  LIMIT :limit OFFSET :offset`,
 		{
 			type: QueryTypes.SELECT,
