@@ -199,27 +199,75 @@ function totals(pieces: readonly ChargeablePiece[]): Totals {
 	return { grossKg, volumeM3: mm3.dividedBy(MM3_PER_M3) };
 }
 
+/** Up to this many pieces each get their own step line; more are grouped by their size. */
+export const PIECE_DETAIL_LIMIT = 40;
+
+interface VolumeSteps {
+	cm3: Decimal;
+	steps: string[];
+}
+
+// The rounded-cm volume does not depend on the divisor: air and courier share one computation.
+const volumeCache = new WeakMap<readonly ChargeablePiece[], VolumeSteps>();
+
+function roundedCm3(piece: ChargeablePiece) {
+	const l = mmToNearestCm(piece.lengthMm);
+	const w = mmToNearestCm(piece.widthMm);
+	const h = mmToNearestCm(piece.heightMm);
+	return { l, w, h, each: exact(l).times(w).times(h) };
+}
+
+function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
+	const cached = volumeCache.get(pieces);
+	if (cached) return cached;
+	const steps: string[] = [];
+	let cm3 = ZERO;
+	const line = (name: string, piece: ChargeablePiece, count: number) => {
+		const { l, w, h, each } = roundedCm3(piece);
+		const all = each.times(count);
+		cm3 = cm3.plus(all);
+		steps.push(
+			`${name}: ${cm(piece.lengthMm)} × ${cm(piece.widthMm)} × ` +
+				`${cm(piece.heightMm)} cm, to the nearest whole cm ${l} × ${w} × ${h} cm = ` +
+				`${show(each)} cm³` +
+				(count === 1 ? '' : ` each, ${show(all)} cm³ in all`)
+		);
+	};
+	if (pieces.length <= PIECE_DETAIL_LIMIT) {
+		pieces.forEach((piece, index) => line(pieceName(piece, index), piece, piece.count));
+	} else {
+		// Many pieces: one line per size (the volume depends on the size only), naming a few.
+		const groups = new Map<string, { piece: ChargeablePiece; count: number; names: string[] }>();
+		pieces.forEach((piece, index) => {
+			const key = `${piece.lengthMm}×${piece.widthMm}×${piece.heightMm}`;
+			const group = groups.get(key) ?? { piece, count: 0, names: [] };
+			group.count += piece.count;
+			group.names.push(piece.label ?? `Piece ${index + 1}`);
+			groups.set(key, group);
+		});
+		for (const { piece, count, names } of groups.values()) {
+			const shown = names.slice(0, 3).join('; ');
+			const more = names.length > 3 ? `; and ${group(String(names.length - 3))} more` : '';
+			line(
+				`${group(String(count))} piece${count === 1 ? '' : 's'} (${shown}${more})`,
+				piece,
+				count
+			);
+		}
+	}
+	const result = { cm3, steps };
+	volumeCache.set(pieces, result);
+	return result;
+}
+
 function byDivisor(
 	rule: VolumetricDivisorRule,
 	pieces: readonly ChargeablePiece[],
 	t: Totals
 ): ChargeableWeight {
-	const steps: string[] = [];
-	let cm3 = ZERO;
-	pieces.forEach((piece, index) => {
-		const l = mmToNearestCm(piece.lengthMm);
-		const w = mmToNearestCm(piece.widthMm);
-		const h = mmToNearestCm(piece.heightMm);
-		const each = exact(l).times(w).times(h);
-		const all = each.times(piece.count);
-		cm3 = cm3.plus(all);
-		steps.push(
-			`${pieceName(piece, index)}: ${cm(piece.lengthMm)} × ${cm(piece.widthMm)} × ` +
-				`${cm(piece.heightMm)} cm, to the nearest whole cm ${l} × ${w} × ${h} cm = ` +
-				`${show(each)} cm³` +
-				(piece.count === 1 ? '' : ` each, ${show(all)} cm³ in all`)
-		);
-	});
+	const volume = volumeSteps(pieces);
+	const steps = [...volume.steps];
+	const cm3 = volume.cm3;
 	const divisor = exact(rule.cm3PerKg);
 	const volumeWeight = cm3.dividedBy(divisor);
 	steps.push(
@@ -331,7 +379,14 @@ export function chargeableWeight(
 	rule: ChargeableRule
 ): ChargeableWeight {
 	checkPieces(pieces);
-	const t = totals(pieces);
+	return weigh(pieces, rule, totals(pieces));
+}
+
+function weigh(
+	pieces: readonly ChargeablePiece[],
+	rule: ChargeableRule,
+	t: Totals
+): ChargeableWeight {
 	switch (rule.kind) {
 		case 'cm3_per_kg':
 			return byDivisor(rule, pieces, t);
@@ -352,7 +407,9 @@ export function chargeableWeights(
 	pieces: readonly ChargeablePiece[],
 	rules: readonly ChargeableRule[] = CHARGEABLE_RULES
 ): ChargeableWeight[] {
-	return rules.map((rule) => chargeableWeight(pieces, rule));
+	checkPieces(pieces);
+	const t = totals(pieces);
+	return rules.map((rule) => weigh(pieces, rule, t));
 }
 
 /** The built-in rule for a mode. */
