@@ -58,6 +58,8 @@ test('the pages a coordinator works in', async ({ page }) => {
 		'/shipments/new',
 		'/products',
 		'/products/new',
+		'/places',
+		'/parties',
 		'/trace?q=PB20-000100'
 	]) {
 		await page.goto(path);

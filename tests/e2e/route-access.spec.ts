@@ -107,6 +107,14 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 		]
 	},
 	'/shipments': { page: [{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 }] },
+	'/places': {
+		page: [{ method: 'GET', path: '/places', expect: READ_PRODUCTS }],
+		actions: [{ method: 'POST', path: '/places', form: { code: '' }, expect: EDITOR_ACTION }]
+	},
+	'/parties': {
+		page: [{ method: 'GET', path: '/parties', expect: READ_PRODUCTS }],
+		actions: [{ method: 'POST', path: '/parties', form: { name: '' }, expect: EDITOR_ACTION }]
+	},
 	'/trace': { page: [{ method: 'GET', path: '/trace?q=PB20-000001', expect: STAFF_PAGE }] },
 	'/shipments/new': {
 		page: [{ method: 'GET', path: '/shipments/new', expect: EDITOR_PAGE }],
