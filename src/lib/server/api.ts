@@ -1,6 +1,6 @@
 import { error, json } from '@sveltejs/kit';
 import type { z } from 'zod';
-import type { ServiceResult } from './services/users';
+import type { ServiceResult } from './services/result';
 
 /** Parses a JSON body against a schema; anything else is a 400 naming each bad field's path. */
 export async function readJson<S extends z.ZodType>(

@@ -1,5 +1,5 @@
 import { message, setError, type SuperValidated } from 'sveltekit-superforms';
-import type { ServiceResult } from './services/users';
+import type { ServiceResult } from './services/result';
 
 /** Puts a refused service result on the form: field errors inline, the summary on top. */
 export function refuse<T extends Record<string, unknown>>(

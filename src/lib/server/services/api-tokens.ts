@@ -3,7 +3,7 @@ import type { SessionUser } from '../auth/session-user';
 import { loadSessionUser } from '../auth/session-user';
 import { ApiToken, User } from '../db/models';
 import { recordAudit } from './audit';
-import type { ServiceResult } from './users';
+import type { ServiceResult } from './result';
 
 const PREFIX = 'lf_';
 

@@ -4,7 +4,7 @@ import { normalizeLocationCode } from '../../trade/unlocode';
 import type { SessionUser } from '../auth/session-user';
 import { Party, Place } from '../db/models';
 import { recordAudit } from './audit';
-import type { ServiceResult } from './users';
+import type { ServiceResult } from './result';
 
 export async function listPlaces() {
 	return Place.findAll({

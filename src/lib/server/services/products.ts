@@ -5,7 +5,7 @@ import { lbToKg, inchesToMm } from '../../packing/units';
 import type { SessionUser } from '../auth/session-user';
 import { Product, ProductPackaging, type BatteryConfig } from '../db/models';
 import { recordAudit } from './audit';
-import type { ServiceResult } from './users';
+import { invalid, type ServiceResult } from './result';
 
 export interface ProductRow {
 	id: string;
@@ -148,15 +148,6 @@ function packagingFields(input: ProductInput) {
 		cartonGrossKg: toKg(input.cartonGrossWeight!, input.units, 3),
 		orientation: input.orientation,
 		maxLoadOnTopKg: input.stackable ? toKg(input.maxLoadOnTop!, input.units, 3) : null
-	};
-}
-
-function invalid(fieldErrors: Record<string, string>) {
-	return {
-		ok: false as const,
-		status: 400 as const,
-		message: 'Check the highlighted fields.',
-		fieldErrors
 	};
 }
 

@@ -8,7 +8,7 @@ import { recordAudit } from './audit';
 import { productsBySku } from './products';
 import { getShipment } from './shipment-detail';
 import { canEditShipments, shipmentScopeSql } from './shipment-scope';
-import type { ServiceResult } from './users';
+import { refused as fail, type ServiceResult } from './result';
 
 export interface LotRow {
 	id: string;
@@ -29,17 +29,6 @@ export async function listLots(shipmentId: string): Promise<LotRow[]> {
 		{ type: QueryTypes.SELECT, replacements: { shipmentId } }
 	);
 }
-
-const fail = (
-	status: 400 | 403 | 404 | 409,
-	message: string,
-	fieldErrors: Record<string, string> = {}
-) => ({
-	ok: false as const,
-	status,
-	message,
-	fieldErrors
-});
 
 /** Records a lot in a carton range; the range must lie within the cartons of that product's lines. */
 export async function addLot(

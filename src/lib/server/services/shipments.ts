@@ -17,22 +17,11 @@ import {
 } from '../db/models';
 import { recordAudit } from './audit';
 import { canEditShipments, shipmentScopeWhere } from './shipment-scope';
-import type { ServiceResult } from './users';
+import { refused as refusal, type Refusal, type ServiceResult } from './result';
 
 /** Header and lines may change only before the papers are issued. */
 export const EDITABLE_STATUSES: readonly ShipmentStatus[] = ['draft', 'booked'];
 
-type Refusal = Extract<ServiceResult<never>, { ok: false }>;
-const refusal = (
-	status: Refusal['status'],
-	message: string,
-	fieldErrors: Record<string, string> = {}
-): Refusal => ({
-	ok: false,
-	status,
-	message,
-	fieldErrors
-});
 const CONFLICT = refusal(
 	409,
 	'Someone else changed this shipment while you were editing. Reload to see their change, then apply yours again.'

@@ -5,11 +5,9 @@ import { hashPassword } from '../auth/password';
 import type { SessionUser } from '../auth/session-user';
 import { Organization, User } from '../db/models';
 import { recordAudit } from './audit';
+import { invalid, type ServiceResult } from './result';
 
-export type FieldErrors = Record<string, string>;
-export type ServiceResult<T> =
-	| { ok: true; value: T }
-	| { ok: false; status: 400 | 403 | 404 | 409; message: string; fieldErrors: FieldErrors };
+export type { FieldErrors, ServiceResult } from './result';
 
 export interface UserRow {
 	id: string;
@@ -49,10 +47,6 @@ function auditView(user: User) {
 }
 
 const withOrganization = { include: [{ model: Organization, as: 'organization' }] };
-
-function invalid(fieldErrors: FieldErrors, message = 'Check the highlighted fields.') {
-	return { ok: false as const, status: 400 as const, message, fieldErrors };
-}
 
 export async function listUsers(): Promise<UserRow[]> {
 	const users = await User.findAll({ ...withOrganization, order: [['name', 'ASC']] });
