@@ -3,6 +3,11 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { authHandle } from '$lib/server/auth';
 import { isApiPath, requireUser } from '$lib/server/auth/guard';
 import { loadSessionUser } from '$lib/server/auth/session-user';
+import {
+	cachedSessionUserId,
+	rememberSession,
+	sessionCookieKey
+} from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
 import { userForToken } from '$lib/server/services/api-tokens';
 
@@ -12,6 +17,9 @@ const PUBLIC_PATHS = new Set(['/signin', '/api/health']);
 export const init: ServerInit = async () => {
 	// Fail at start-up, not on the first request, when the database is unreachable or misconfigured.
 	await db().authenticate();
+	// adapter-node emits this after SIGINT/SIGTERM once requests are done; the open pool
+	// would otherwise keep the process alive.
+	process.once('sveltekit:shutdown', () => void db().close());
 };
 
 // Auth.js's own HTTP endpoints stay closed: sign-in goes through our form action only.
@@ -34,8 +42,14 @@ const loadUser: Handle = async ({ event, resolve }) => {
 		}
 		return resolve(event);
 	}
-	const session = await event.locals.auth();
-	if (session?.user?.id) event.locals.user = await loadSessionUser(session.user.id);
+	const key = sessionCookieKey(event.request.headers.get('cookie'));
+	let userId = key ? cachedSessionUserId(key) : null;
+	if (!userId && key) {
+		const session = await event.locals.auth();
+		userId = session?.user?.id ?? null;
+		if (userId) rememberSession(key, userId, session?.expires);
+	}
+	if (userId) event.locals.user = await loadSessionUser(userId);
 	return resolve(event);
 };
 

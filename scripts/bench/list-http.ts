@@ -143,7 +143,8 @@ for (const [key, label] of [
 }
 
 // The measure API over HTTP, one request at a time: server time plus loopback HTTP.
-for (const pallet of [false, true]) {
+// BENCH_LIST_ONLY=1 skips it (e.g. to profile the list alone with BENCH_NODE_ARGS=--cpu-prof).
+for (const pallet of process.env.BENCH_LIST_ONLY ? [] : [false, true]) {
 	const body = JSON.stringify(benchInput({ pallet }));
 	const label = pallet ? 'on P1208 pallets' : 'loose cartons';
 	const probe = await fetch(`${base}/api/v1/calc/measure`, {

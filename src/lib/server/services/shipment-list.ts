@@ -3,6 +3,7 @@ import type { ShipmentListQuery } from '../../schemas/shipments';
 import type { SessionUser } from '../auth/session-user';
 import { Shipment } from '../db/models';
 import { shipmentScopeSql } from './shipment-scope';
+import { isStaff } from '../../roles';
 
 export interface ShipmentListRow {
 	id: string;
@@ -61,7 +62,7 @@ export async function listShipments(user: SessionUser, query: ShipmentListQuery)
 	const where = conditions.join(' AND ');
 	const direction = query.dir === 'asc' ? 'ASC' : 'DESC';
 	const sequelize = Shipment.sequelize!;
-	const rows = await sequelize.query<ShipmentListRow & { createdAt: Date }>(
+	const rowsQuery = sequelize.query<ShipmentListRow & { createdAt: Date }>(
 		`SELECT s.id, s.reference, s.status, c.name AS "customerName", o.code AS "originCode",
 		        d.code AS "destinationCode", s.chosen_mode AS "chosenMode",
 		        s.modes_considered AS "modesConsidered", s.incoterm, s.etd, s.eta,
@@ -83,14 +84,24 @@ export async function listShipments(user: SessionUser, query: ShipmentListQuery)
 			}
 		}
 	);
-	const [count] = await sequelize.query<{ total: number }>(
+	const countQuery = sequelize.query<{ total: number }>(
 		`SELECT count(*)::int AS total FROM shipments s WHERE ${where}`,
 		{ type: QueryTypes.SELECT, replacements }
 	);
+	const [rows, [count]] = await Promise.all([rowsQuery, countQuery]);
 	return {
 		rows: rows.map((r) => ({ ...r, createdAt: new Date(r.createdAt).toISOString() })),
 		total: count?.total ?? 0,
 		page: query.page,
 		pageSize: query.pageSize
 	};
+}
+
+/** The customer organizations for the list's filter (staff only; one plain query). */
+export async function customerFilterOptions(user: SessionUser) {
+	if (!isStaff(user.role)) return [];
+	return Shipment.sequelize!.query<{ id: string; name: string }>(
+		`SELECT id, name FROM organizations WHERE kind = 'customer' ORDER BY name`,
+		{ type: QueryTypes.SELECT }
+	);
 }

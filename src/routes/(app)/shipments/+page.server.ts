@@ -1,10 +1,8 @@
 import { error } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/guard';
-import { Organization } from '$lib/server/db';
 import { canEditShipments } from '$lib/server/services/shipment-scope';
-import { listShipments } from '$lib/server/services/shipment-list';
+import { customerFilterOptions, listShipments } from '$lib/server/services/shipment-list';
 import { shipmentListQuerySchema } from '$lib/schemas/shipments';
-import { isStaff } from '$lib/roles';
 import type { PageServerLoad } from './$types';
 
 // Returns: shipments (one page), total, query (the filters in force), customers (staff only), canCreate.
@@ -17,14 +15,9 @@ export const load: PageServerLoad = async (event) => {
 			message: `The filter “${issue?.path.join('.')}” is not valid: ${issue?.message}`
 		});
 	}
-	const result = await listShipments(user, parsed.data);
-	const customers = isStaff(user.role)
-		? await Organization.findAll({
-				where: { kind: 'customer' },
-				attributes: ['id', 'name'],
-				order: [['name', 'ASC']],
-				raw: true
-			})
-		: [];
+	const [result, customers] = await Promise.all([
+		listShipments(user, parsed.data),
+		customerFilterOptions(user)
+	]);
 	return { ...result, query: parsed.data, customers, canCreate: canEditShipments(user) };
 };

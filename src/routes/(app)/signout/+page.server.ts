@@ -1,6 +1,7 @@
 import { isRedirect, redirect, type RequestEvent } from '@sveltejs/kit';
 import { signOut } from '$lib/server/auth';
 import { requireUser } from '$lib/server/auth/guard';
+import { forgetSession, sessionCookieKey } from '$lib/server/auth/session-cache';
 import { recordAudit } from '$lib/server/services/audit';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -27,6 +28,7 @@ export const actions: Actions = {
 			},
 			body: new URLSearchParams({ redirectTo: '/signin' })
 		});
+		forgetSession(sessionCookieKey(event.request.headers.get('cookie')));
 		try {
 			await signOut({ ...event, request } as RequestEvent);
 		} catch (error) {
