@@ -1,0 +1,251 @@
+/**
+ * Blocks: cuboids of boxes placed together as one unit, after Fanslau & Bortfeldt (2010), "A tree
+ * search algorithm for solving the container loading problem", INFORMS J. Computing 22(2),
+ * sections 3.2–3.3 (simple and general blocks, packing area, minimum fill rate). Our own code.
+ *
+ * - Simple block: nx × ny × nz boxes of one type in one orientation.
+ * - General block: two blocks side by side along x or y, or one on the other's packing area along
+ *   z, kept only when its boxes fill at least MIN_FILL of its bounding box.
+ * - Packing area: the rectangle at the block's origin corner (ax × ay) on its top face that is
+ *   wholly covered by box tops at the block's full height; only there may more cargo rest, so
+ *   full support holds by construction.
+ * - Stacking: `cap` is the mass the block may still take on top, charged in full to every box in
+ *   it (a conservative reading: a load anywhere on the block is assumed to bear on each box).
+ */
+import { NO_LOAD, type CoreBoxType, type CoreContainer } from './core-types';
+
+export const MIN_FILL = 0.98;
+
+export interface Block {
+	dx: number;
+	dy: number;
+	dz: number;
+	/** Packing area on top, from the block's origin corner. */
+	ax: number;
+	ay: number;
+	/** Volume of its boxes. */
+	vol: number;
+	weight: number;
+	cap: number;
+	boxes: number;
+	/** Box counts per type, sparse and sorted by type. */
+	types: number[];
+	nums: number[];
+	/** 0 simple; 1, 2, 3: b after a along x, y, z. */
+	kind: 0 | 1 | 2 | 3;
+	/** Simple: type, extent index, repetitions. */
+	t: number;
+	o: number;
+	nx: number;
+	ny: number;
+	nz: number;
+	a: Block | null;
+	b: Block | null;
+}
+
+export interface BlockLimits {
+	maxBlocks: number;
+	/** Stop generating general blocks at this performance.now() time. */
+	deadline: number;
+}
+
+function key(b: Block): string {
+	return `${b.dx},${b.dy},${b.dz},${b.ax},${b.ay}:${b.types.join('.')}:${b.nums.join('.')}`;
+}
+
+function simpleBlocks(types: CoreBoxType[], c: CoreContainer): Block[] {
+	const out: Block[] = [];
+	types.forEach((bt, t) => {
+		bt.extents.forEach((e, o) => {
+			const maxX = Math.min(Math.floor(c.L / e.dx), bt.count);
+			const maxY = Math.min(Math.floor(c.W / e.dy), bt.count);
+			let maxZ = Math.min(Math.floor(c.H / e.dz), bt.count);
+			if (bt.cap === NO_LOAD) maxZ = Math.min(maxZ, 1);
+			else if (bt.cap !== Infinity && bt.weight > 0) {
+				maxZ = Math.min(maxZ, Math.floor(bt.cap / bt.weight) + 1);
+			}
+			for (let nz = 1; nz <= maxZ; nz++) {
+				for (let ny = 1; ny <= maxY && ny * nz <= bt.count; ny++) {
+					for (let nx = 1; nx <= maxX && nx * ny * nz <= bt.count; nx++) {
+						const n = nx * ny * nz;
+						const cap = bt.cap === NO_LOAD ? NO_LOAD : bt.cap - (nz - 1) * bt.weight;
+						out.push({
+							dx: nx * e.dx,
+							dy: ny * e.dy,
+							dz: nz * e.dz,
+							ax: nx * e.dx,
+							ay: ny * e.dy,
+							vol: n * bt.volume,
+							weight: n * bt.weight,
+							cap,
+							boxes: n,
+							types: [t],
+							nums: [n],
+							kind: 0,
+							t,
+							o,
+							nx,
+							ny,
+							nz,
+							a: null,
+							b: null
+						});
+					}
+				}
+			}
+		});
+	});
+	return out;
+}
+
+/** Merged sparse counts of a and b, or null when more than `count` of some type. */
+function mergeCounts(a: Block, b: Block, types: CoreBoxType[]): [number[], number[]] | null {
+	const ts: number[] = [];
+	const ns: number[] = [];
+	let i = 0;
+	let j = 0;
+	while (i < a.types.length || j < b.types.length) {
+		const ta = i < a.types.length ? a.types[i]! : Infinity;
+		const tb = j < b.types.length ? b.types[j]! : Infinity;
+		const t = Math.min(ta, tb);
+		let n = 0;
+		if (ta === t) n += a.nums[i++]!;
+		if (tb === t) n += b.nums[j++]!;
+		if (n > types[t]!.count) return null;
+		ts.push(t);
+		ns.push(n);
+	}
+	return [ts, ns];
+}
+
+/** The general block of b placed after a along `kind`, or null when not allowed. */
+function combine(
+	a: Block,
+	b: Block,
+	kind: 1 | 2 | 3,
+	c: CoreContainer,
+	types: CoreBoxType[]
+): Block | null {
+	let dx: number, dy: number, dz: number, ax: number, ay: number, cap: number;
+	if (kind === 3) {
+		// b rests on a's packing area.
+		if (b.dx > a.ax || b.dy > a.ay || a.cap === NO_LOAD || a.cap < b.weight) return null;
+		dx = a.dx;
+		dy = a.dy;
+		dz = a.dz + b.dz;
+		ax = b.ax;
+		ay = b.ay;
+		cap = b.cap === NO_LOAD ? NO_LOAD : Math.min(b.cap, a.cap - b.weight);
+	} else {
+		// Side by side; the taller one first so the packing area stays at the origin.
+		if (b.dz > a.dz) return null;
+		if (kind === 1) {
+			dx = a.dx + b.dx;
+			dy = Math.max(a.dy, b.dy);
+			ax = a.ax;
+			ay = a.ay;
+			if (b.dz === a.dz && a.ax === a.dx && Math.min(a.ay, b.ay) * (a.dx + b.ax) > ax * ay) {
+				ax = a.dx + b.ax;
+				ay = Math.min(a.ay, b.ay);
+			}
+		} else {
+			dx = Math.max(a.dx, b.dx);
+			dy = a.dy + b.dy;
+			ax = a.ax;
+			ay = a.ay;
+			if (b.dz === a.dz && a.ay === a.dy && Math.min(a.ax, b.ax) * (a.dy + b.ay) > ax * ay) {
+				ax = Math.min(a.ax, b.ax);
+				ay = a.dy + b.ay;
+			}
+		}
+		dz = a.dz;
+		cap = a.cap === NO_LOAD || b.cap === NO_LOAD ? NO_LOAD : Math.min(a.cap, b.cap);
+	}
+	if (dx > c.L || dy > c.W || dz > c.H) return null;
+	const vol = a.vol + b.vol;
+	if (vol < MIN_FILL * dx * dy * dz) return null;
+	const merged = mergeCounts(a, b, types);
+	if (merged === null) return null;
+	return {
+		dx,
+		dy,
+		dz,
+		ax,
+		ay,
+		vol,
+		weight: a.weight + b.weight,
+		cap,
+		boxes: a.boxes + b.boxes,
+		types: merged[0],
+		nums: merged[1],
+		kind,
+		t: -1,
+		o: -1,
+		nx: 0,
+		ny: 0,
+		nz: 0,
+		a,
+		b
+	};
+}
+
+/** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
+function compareBlocks(p: Block, q: Block, keys: Map<Block, string>): number {
+	if (p.vol !== q.vol) return q.vol - p.vol;
+	if (p.boxes !== q.boxes) return p.boxes - q.boxes;
+	const kp = keys.get(p)!;
+	const kq = keys.get(q)!;
+	return kp < kq ? -1 : kp > kq ? 1 : 0;
+}
+
+/**
+ * Simple blocks, then general blocks in rounds (each round pairs the blocks of the last round with
+ * all so far) until `maxBlocks`, no new block, or the deadline. Sorted by compareBlocks.
+ */
+export function generateBlocks(
+	types: CoreBoxType[],
+	c: CoreContainer,
+	limits: BlockLimits
+): Block[] {
+	const keys = new Map<Block, string>();
+	const seen = new Set<string>();
+	const all: Block[] = [];
+	const add = (b: Block): boolean => {
+		const k = key(b);
+		if (seen.has(k)) return false;
+		seen.add(k);
+		keys.set(b, k);
+		all.push(b);
+		return true;
+	};
+	let simple = simpleBlocks(types, c);
+	if (simple.length > limits.maxBlocks) {
+		// Keep every single box, then the largest.
+		const singles = simple.filter((b) => b.boxes === 1);
+		const rest = simple.filter((b) => b.boxes > 1).sort((p, q) => q.vol - p.vol);
+		simple = singles.concat(rest.slice(0, Math.max(0, limits.maxBlocks - singles.length)));
+	}
+	for (const b of simple) add(b);
+	let from = 0;
+	while (all.length < limits.maxBlocks && from < all.length) {
+		const to = all.length;
+		outer: for (let j = from; j < to; j++) {
+			const nb = all[j]!;
+			for (let i = 0; i < to; i++) {
+				if (i >= from && i < j) continue; // this pair was tried in row i
+				const ob = all[i]!;
+				for (let kind = 1 as 1 | 2 | 3; kind <= 3; kind++) {
+					const g1 = combine(ob, nb, kind, c, types);
+					if (g1 !== null && add(g1) && all.length >= limits.maxBlocks) break outer;
+					if (ob === nb) continue;
+					const g2 = combine(nb, ob, kind, c, types);
+					if (g2 !== null && add(g2) && all.length >= limits.maxBlocks) break outer;
+				}
+			}
+			if ((j & 15) === 0 && performance.now() > limits.deadline) break;
+		}
+		if (performance.now() > limits.deadline) break;
+		from = to;
+	}
+	return all.sort((p, q) => compareBlocks(p, q, keys));
+}

@@ -1,0 +1,144 @@
+/**
+ * Which container types, and how many: one candidate sequence per container type, filling
+ * containers of that type one after another (the single-container search on the pieces left);
+ * when a container takes everything that is left, a smaller ('fewest') or cheaper ('cheapest')
+ * type that also takes it all replaces it. The best sequence wins:
+ * 1. most pieces placed;
+ * 2. 'fewest': fewest containers, then smaller total internal volume;
+ *    'cheapest': lowest total rate, then fewest containers;
+ * 3. the earlier candidate type.
+ * The time budget is shared evenly between the sequences, and within one between the containers
+ * it is still expected to need.
+ */
+import Decimal from 'decimal.js';
+import { canTake, fillContainer, type FillResult } from './fill-container';
+import type { PreparedContainer, PreparedItem } from './prepare';
+
+export interface MixOptions {
+	/** Rates per container index for 'cheapest'; null for 'fewest'. */
+	rates: Decimal[] | null;
+	maxContainers: number;
+	deadline: number;
+	seed: number;
+	/** Called after each sequence with the best one so far. */
+	onSequence?: (best: Sequence) => void;
+}
+
+export interface Sequence {
+	fills: { type: number; fill: FillResult }[];
+	/** Pieces left per item index. */
+	remaining: number[];
+	placed: number;
+	stoppedBy: 'complete' | 'time';
+}
+
+function volumeLeft(items: readonly PreparedItem[], remaining: readonly number[]): number {
+	return items.reduce((v, it, i) => v + it.volume * remaining[i]!, 0);
+}
+
+function takesAll(fill: FillResult, remaining: readonly number[]): boolean {
+	return fill.placed.every((p, i) => p === remaining[i]);
+}
+
+/** Types to try instead of `primary` for the last container, best first. */
+function alternatives(primary: number, containers: readonly PreparedContainer[], o: MixOptions) {
+	const better = (u: number): boolean => {
+		const cu = containers[u]!;
+		const cp = containers[primary]!;
+		if (o.rates === null) return cu.volume < cp.volume;
+		const c = o.rates[u]!.comparedTo(o.rates[primary]!);
+		return c < 0 || (c === 0 && cu.volume < cp.volume);
+	};
+	return containers
+		.map((_, u) => u)
+		.filter((u) => u !== primary && better(u))
+		.sort((a, b) =>
+			o.rates === null
+				? containers[a]!.volume - containers[b]!.volume
+				: o.rates[a]!.comparedTo(o.rates[b]!) || containers[a]!.volume - containers[b]!.volume
+		);
+}
+
+function sequence(
+	primary: number,
+	items: readonly PreparedItem[],
+	containers: readonly PreparedContainer[],
+	start: readonly number[],
+	o: MixOptions,
+	deadline: number
+): Sequence {
+	const remaining = start.slice();
+	const fills: Sequence['fills'] = [];
+	let stoppedBy: Sequence['stoppedBy'] = 'complete';
+	const c = containers[primary]!;
+	const alts = alternatives(primary, containers, o);
+	while (remaining.some((r) => r > 0) && fills.length < o.maxContainers) {
+		if (!items.some((it, i) => remaining[i]! > 0 && canTake(it, c))) break;
+		const expected = Math.min(
+			o.maxContainers - fills.length,
+			Math.ceil(volumeLeft(items, remaining) / (c.volume * 0.85))
+		);
+		const slice = Math.max(0, deadline - performance.now()) / (Math.max(1, expected) + 1);
+		let fill = fillContainer(items, remaining, c, performance.now() + slice, o.seed);
+		let type = primary;
+		if (fill.stoppedBy === 'time') stoppedBy = 'time';
+		if (fill.boxes.length === 0) break;
+		if (takesAll(fill, remaining)) {
+			for (const u of alts) {
+				const alt = fillContainer(
+					items,
+					remaining,
+					containers[u]!,
+					performance.now() + slice,
+					o.seed
+				);
+				if (alt.stoppedBy === 'time') stoppedBy = 'time';
+				if (takesAll(alt, remaining)) {
+					fill = alt;
+					type = u;
+					break;
+				}
+			}
+		}
+		fill.placed.forEach((p, i) => (remaining[i]! -= p));
+		fills.push({ type, fill });
+	}
+	const placed = fills.reduce((n, f) => n + f.fill.boxes.length, 0);
+	return { fills, remaining, placed, stoppedBy };
+}
+
+function better(
+	s: Sequence,
+	t: Sequence,
+	containers: readonly PreparedContainer[],
+	rates: Decimal[] | null
+): boolean {
+	if (s.placed !== t.placed) return s.placed > t.placed;
+	const volume = (q: Sequence) => q.fills.reduce((v, f) => v + containers[f.type]!.volume, 0);
+	if (rates !== null) {
+		const cost = (q: Sequence) =>
+			q.fills.reduce((sum, f) => sum.plus(rates[f.type]!), new Decimal(0));
+		const c = cost(s).comparedTo(cost(t));
+		if (c !== 0) return c < 0;
+	}
+	if (s.fills.length !== t.fills.length) return s.fills.length < t.fills.length;
+	return rates === null && volume(s) < volume(t);
+}
+
+export function chooseMix(
+	items: readonly PreparedItem[],
+	containers: readonly PreparedContainer[],
+	remaining: readonly number[],
+	o: MixOptions
+): Sequence {
+	let best: Sequence | null = null;
+	let stoppedBy: Sequence['stoppedBy'] = 'complete';
+	for (let t = 0; t < containers.length; t++) {
+		const share = Math.max(0, o.deadline - performance.now()) / (containers.length - t);
+		const s = sequence(t, items, containers, remaining, o, performance.now() + share);
+		if (s.stoppedBy === 'time') stoppedBy = 'time';
+		if (best === null || better(s, best, containers, o.rates)) best = s;
+		o.onSequence?.(best);
+	}
+	return { ...best!, stoppedBy };
+}

@@ -1,0 +1,80 @@
+/**
+ * One container of one type, filled from the pieces still to place: blocks, then the beam search,
+ * then the boxes in container coordinates.
+ */
+import { generateBlocks } from './blocks';
+import type { CoreProblem } from './core-types';
+import { expandPlaced } from './expand';
+import { coreBoxType, type PreparedContainer, type PreparedItem } from './prepare';
+import { beamSearch, blockTable } from './search';
+import type { OrientedExtent } from './orientations';
+
+/** Most blocks generated per container (Fanslau & Bortfeldt 2010 use 10,000). */
+export const MAX_BLOCKS = 10_000;
+/** Widest beam of the schedule; a search that gets there is complete. */
+export const MAX_WIDTH = 1024;
+/** Children tried per beam node. */
+export const CHILDREN = 4;
+
+export interface FilledBox {
+	/** Index into the prepared items. */
+	item: number;
+	extent: OrientedExtent;
+	x: number;
+	y: number;
+	z: number;
+}
+
+export interface FillResult {
+	boxes: FilledBox[];
+	/** Pieces placed per item index. */
+	placed: number[];
+	volume: number;
+	stoppedBy: 'complete' | 'time';
+}
+
+/** Whether `item` could go into an empty container `c` on its own. */
+export function canTake(item: PreparedItem, c: PreparedContainer): boolean {
+	return item.weight <= c.payload && coreBoxType(item, c, 1).extents.length > 0;
+}
+
+export function fillContainer(
+	items: readonly PreparedItem[],
+	remaining: readonly number[],
+	c: PreparedContainer,
+	deadline: number,
+	seed: number
+): FillResult {
+	const index: number[] = [];
+	const types = [];
+	for (let i = 0; i < items.length; i++) {
+		if (remaining[i]! > 0 && canTake(items[i]!, c)) {
+			index.push(i);
+			types.push(coreBoxType(items[i]!, c, remaining[i]!));
+		}
+	}
+	const placed = items.map(() => 0);
+	if (types.length === 0) return { boxes: [], placed, volume: 0, stoppedBy: 'complete' };
+	const problem: CoreProblem = {
+		container: { L: c.L, W: c.W, H: c.H, payload: c.payload },
+		types
+	};
+	const start = performance.now();
+	// Block generation is bounded by count; the deadline is only a guard for huge inputs.
+	const blocks = generateBlocks(types, problem.container, {
+		maxBlocks: MAX_BLOCKS,
+		deadline: start + (deadline - start) * 0.4
+	});
+	const result = beamSearch(problem, blockTable(blocks), {
+		deadline,
+		maxWidth: MAX_WIDTH,
+		children: CHILDREN,
+		seed
+	});
+	const boxes = expandPlaced(problem, result.state.placed).map((b) => {
+		const item = index[b.type]!;
+		placed[item]!++;
+		return { item, extent: b.extent, x: b.x, y: b.y, z: b.z };
+	});
+	return { boxes, placed, volume: result.state.vol, stoppedBy: result.stoppedBy };
+}

@@ -1,0 +1,168 @@
+/**
+ * planLoad: the whole plan for a shipment. Pieces no candidate container can take are reported
+ * first, with the reason; the rest go to container-mix.ts (which types, how many) and the
+ * single-container search; the result is dressed with utilisation, payload, the centre of gravity
+ * and its warnings.
+ *
+ * Pure module: no framework imports. Deterministic: the same input and seed give the same plan
+ * whenever the search ends before its time budget (`search.stoppedBy === 'complete'`).
+ */
+import Decimal from 'decimal.js';
+import { centreOfGravity, centreOfGravityWarnings } from './centre-of-gravity';
+import { chooseMix } from './container-mix';
+import type { FillResult } from './fill-container';
+import {
+	prepareContainer,
+	prepareItem,
+	type PreparedContainer,
+	type PreparedItem
+} from './prepare';
+import type {
+	ContainerLoad,
+	LoadPlan,
+	LoadPlanInput,
+	LoadPlanResult,
+	Placement,
+	UnplacedItems
+} from './types';
+import { unplaceableReason } from './unplaceable';
+import { validateLoadInput } from './validate-input';
+
+export const DEFAULT_TIME_BUDGET_MS = 3_000;
+export const DEFAULT_MAX_CONTAINERS = 100;
+const M3 = new Decimal(1e9);
+
+function share(part: Decimal, whole: Decimal): string {
+	return whole.isZero() ? '0.0000' : part.dividedBy(whole).toFixed(4, Decimal.ROUND_HALF_UP);
+}
+
+function containerLoad(
+	index: number,
+	c: PreparedContainer,
+	items: readonly PreparedItem[],
+	fill: FillResult
+): ContainerLoad {
+	const placements: Placement[] = fill.boxes.map((b) => ({
+		itemTypeId: items[b.item]!.source.id,
+		x: b.x,
+		y: b.y,
+		z: b.z,
+		lengthMm: b.extent.dx,
+		widthMm: b.extent.dy,
+		heightMm: b.extent.dz,
+		orientation: b.extent.orientation
+	}));
+	let volume = new Decimal(0);
+	let kg = new Decimal(0);
+	for (const b of fill.boxes) {
+		volume = volume.plus(new Decimal(b.extent.dx).times(b.extent.dy).times(b.extent.dz));
+		kg = kg.plus(items[b.item]!.source.weightKg);
+	}
+	const cog = centreOfGravity(
+		fill.boxes.map((b) => ({
+			weightKg: items[b.item]!.source.weightKg,
+			cx: b.x + b.extent.dx / 2,
+			cy: b.y + b.extent.dy / 2,
+			cz: b.z + b.extent.dz / 2
+		})),
+		c.L,
+		c.W
+	);
+	return {
+		index,
+		containerTypeId: c.source.id,
+		placements,
+		pieces: placements.length,
+		loadedVolumeM3: volume.dividedBy(M3).toFixed(6, Decimal.ROUND_HALF_UP),
+		volumeUtilisation: share(volume, new Decimal(c.volume)),
+		payloadKg: kg.toFixed(3, Decimal.ROUND_HALF_UP),
+		payloadUtilisation: share(kg, new Decimal(c.source.maxPayloadKg)),
+		centreOfGravity: cog,
+		warnings: centreOfGravityWarnings(cog)
+	};
+}
+
+export function planLoad(input: LoadPlanInput): LoadPlanResult {
+	const problems = validateLoadInput(input);
+	if (problems.length > 0) return { ok: false, problems };
+	const start = performance.now();
+	const options = input.options ?? {};
+	const budget = options.timeBudgetMs ?? DEFAULT_TIME_BUDGET_MS;
+	const deadline = start + budget;
+	const maxContainers = options.maxContainers ?? DEFAULT_MAX_CONTAINERS;
+	const seed = options.seed ?? 1;
+	const items = input.items.map(prepareItem);
+	const containers = input.containers.map(prepareContainer);
+	const rates =
+		options.objective === 'cheapest'
+			? containers.map((c) => new Decimal(options.rates![c.source.id]!))
+			: null;
+
+	const unplaced: UnplacedItems[] = [];
+	const remaining = items.map((it) => it.source.count);
+	items.forEach((it, i) => {
+		const reason = unplaceableReason(it, containers);
+		if (reason !== null) {
+			unplaced.push({ itemTypeId: it.source.id, count: it.source.count, reason });
+			remaining[i] = 0;
+		}
+	});
+	const total = remaining.reduce((a, b) => a + b, 0);
+	const mix = chooseMix(items, containers, remaining, {
+		rates,
+		maxContainers,
+		deadline,
+		seed,
+		onSequence: (best) =>
+			options.onProgress?.({
+				containers: best.fills.length,
+				placed: best.placed,
+				total,
+				elapsedMs: Math.round(performance.now() - start)
+			})
+	});
+	const loads = mix.fills.map((f, i) => containerLoad(i + 1, containers[f.type]!, items, f.fill));
+	const stoppedBy = mix.stoppedBy;
+	const reason =
+		maxContainers === 1
+			? 'no space left in the container'
+			: loads.length >= maxContainers
+				? `no space left within the limit of ${maxContainers} containers`
+				: 'no space left';
+	items.forEach((it, i) => {
+		if (mix.remaining[i]! > 0) {
+			unplaced.push({ itemTypeId: it.source.id, count: mix.remaining[i]!, reason });
+		}
+	});
+
+	const counts = containers
+		.map((c, type) => ({
+			containerTypeId: c.source.id,
+			count: loads.filter((l) => l.containerTypeId === c.source.id).length,
+			type
+		}))
+		.filter((x) => x.count > 0)
+		.map(({ containerTypeId, count }) => ({ containerTypeId, count }));
+	let totalCost: string | null = null;
+	if (options.rates !== undefined) {
+		const rateOf = options.rates;
+		if (loads.every((l) => rateOf[l.containerTypeId] !== undefined)) {
+			totalCost = loads
+				.reduce((sum, l) => sum.plus(rateOf[l.containerTypeId]!), new Decimal(0))
+				.toFixed();
+		}
+	}
+	const plan: LoadPlan = {
+		containers: loads,
+		containerCounts: counts,
+		totalCost,
+		unplaced,
+		search: {
+			elapsedMs: Math.round(performance.now() - start),
+			stoppedBy,
+			timeBudgetMs: budget,
+			seed
+		}
+	};
+	return { ok: true, plan, problems: [] };
+}

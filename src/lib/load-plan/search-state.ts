@@ -1,0 +1,196 @@
+/**
+ * A partial stow of one container during the search, and the moves on it: pick the next space,
+ * list the blocks that may go there, place one.
+ *
+ * Space choice follows Parreño et al. (2008) section 3.1: the space whose anchor corner is
+ * nearest a corner of the container (distances sorted, compared lexicographically; larger volume
+ * on ties), where only the floor corners at the front wall count, so the stow grows from the front
+ * wall towards the door. The block goes into that corner (left or right wall side).
+ */
+import type { Block } from './blocks';
+import { NO_LOAD, type CoreProblem } from './core-types';
+import { placeInSpaces, type MinExtents, type Space } from './spaces';
+
+export interface PlacedBlock {
+	block: Block;
+	x: number;
+	y: number;
+	z: number;
+	/** The placed block it rests on (-1: floor). */
+	p: number;
+}
+
+export interface State {
+	spaces: Space[];
+	avail: Int32Array;
+	placed: PlacedBlock[];
+	/** Mass resting on each placed block from blocks placed later (mg). */
+	load: number[];
+	vol: number;
+	weight: number;
+	/** Smallest extents of the boxes left (changes only when a type runs out). */
+	min: MinExtents;
+	/** Per axis, the longest run of box extents left that fits a gap (see reach()). */
+	reach: Reach;
+}
+
+/** fill[g]: the largest sum of extents (of boxes left, any number of each) that is ≤ g mm. */
+export interface Reach {
+	x: Int32Array;
+	y: Int32Array;
+	z: Int32Array;
+}
+
+function axisReach(problem: CoreProblem, avail: Int32Array, size: number, axis: 0 | 1 | 2) {
+	const lengths = new Set<number>();
+	problem.types.forEach((t, i) => {
+		if (avail[i]! <= 0) return;
+		for (const e of t.extents) lengths.add(axis === 0 ? e.dx : axis === 1 ? e.dy : e.dz);
+	});
+	const ok = new Uint8Array(size + 1);
+	ok[0] = 1;
+	const ls = [...lengths];
+	for (let g = 1; g <= size; g++) {
+		for (const l of ls) {
+			if (l <= g && ok[g - l]) {
+				ok[g] = 1;
+				break;
+			}
+		}
+	}
+	const fill = new Int32Array(size + 1);
+	for (let g = 1; g <= size; g++) fill[g] = ok[g] ? g : fill[g - 1]!;
+	return fill;
+}
+
+/** Gap-filling tables for the boxes left. */
+export function reach(problem: CoreProblem, avail: Int32Array): Reach {
+	const c = problem.container;
+	return {
+		x: axisReach(problem, avail, c.L, 0),
+		y: axisReach(problem, avail, c.W, 1),
+		z: axisReach(problem, avail, c.H, 2)
+	};
+}
+
+export function rootState(problem: CoreProblem): State {
+	const { L, W, H } = problem.container;
+	const avail = Int32Array.from(problem.types.map((t) => t.count));
+	return {
+		spaces: [{ x1: 0, y1: 0, z1: 0, x2: L, y2: W, z2: H, p: -1 }],
+		avail,
+		placed: [],
+		load: [],
+		vol: 0,
+		weight: 0,
+		min: minExtents(problem, avail),
+		reach: reach(problem, avail)
+	};
+}
+
+export function cloneState(s: State): State {
+	return {
+		spaces: s.spaces,
+		avail: s.avail.slice(),
+		placed: s.placed.slice(),
+		load: s.load.slice(),
+		vol: s.vol,
+		weight: s.weight,
+		min: s.min,
+		reach: s.reach
+	};
+}
+
+/** Sort key of a space (smaller first): Parreño's sorted corner distances, packed in one number. */
+function spaceKey(s: Space, W: number): number {
+	let a = s.x1;
+	let b = Math.min(s.y1, W - s.y2);
+	let c = s.z1;
+	if (a > b) [a, b] = [b, a];
+	if (b > c) [b, c] = [c, b];
+	if (a > b) [a, b] = [b, a];
+	return (a * 131072 + b) * 131072 + c;
+}
+
+/** Index of the next space to fill, or -1 when none is left. */
+export function selectSpace(state: State, W: number): number {
+	let best = -1;
+	let bestKey = Infinity;
+	let bestVol = -1;
+	const spaces = state.spaces;
+	for (let i = 0; i < spaces.length; i++) {
+		const s = spaces[i]!;
+		const k = spaceKey(s, W);
+		if (k > bestKey) continue;
+		const v = (s.x2 - s.x1) * (s.y2 - s.y1) * (s.z2 - s.z1);
+		if (k < bestKey || v > bestVol) {
+			best = i;
+			bestKey = k;
+			bestVol = v;
+		}
+	}
+	return best;
+}
+
+/** Whether `b` fits space `s` of `state`: size, boxes left, payload, load on what it rests on. */
+export function fits(state: State, s: Space, b: Block, payload: number): boolean {
+	if (b.dx > s.x2 - s.x1 || b.dy > s.y2 - s.y1 || b.dz > s.z2 - s.z1) return false;
+	if (state.weight + b.weight > payload) return false;
+	const avail = state.avail;
+	for (let i = 0; i < b.types.length; i++) if (avail[b.types[i]!]! < b.nums[i]!) return false;
+	for (let p = s.p; p >= 0; p = state.placed[p]!.p) {
+		if (state.placed[p]!.block.cap - state.load[p]! < b.weight) return false;
+	}
+	return true;
+}
+
+/** Smallest extents of the boxes still available, per axis. */
+export function minExtents(problem: CoreProblem, avail: Int32Array): MinExtents {
+	let x = Infinity;
+	let y = Infinity;
+	let z = Infinity;
+	problem.types.forEach((t, i) => {
+		if (avail[i]! <= 0) return;
+		for (const e of t.extents) {
+			if (e.dx < x) x = e.dx;
+			if (e.dy < y) y = e.dy;
+			if (e.dz < z) z = e.dz;
+		}
+	});
+	return { x, y, z };
+}
+
+/** Places `b` in space index `si` of `state` (mutates `state`; `fits` must hold). */
+export function place(problem: CoreProblem, state: State, si: number, b: Block): void {
+	const s = state.spaces[si]!;
+	const W = problem.container.W;
+	const x = s.x1;
+	const y = s.y1 <= W - s.y2 ? s.y1 : s.y2 - b.dy;
+	const z = s.z1;
+	const index = state.placed.length;
+	state.placed.push({ block: b, x, y, z, p: s.p });
+	state.load.push(0);
+	for (let p = s.p; p >= 0; p = state.placed[p]!.p) state.load[p]! += b.weight;
+	let emptied = false;
+	for (let i = 0; i < b.types.length; i++) {
+		const t = b.types[i]!;
+		state.avail[t]! -= b.nums[i]!;
+		if (state.avail[t] === 0) emptied = true;
+	}
+	state.vol += b.vol;
+	state.weight += b.weight;
+	const top: Space | null =
+		b.cap === NO_LOAD || z + b.dz >= s.z2
+			? null
+			: { x1: x, y1: y, z1: z + b.dz, x2: x + b.ax, y2: y + b.ay, z2: s.z2, p: index };
+	if (emptied) {
+		state.min = minExtents(problem, state.avail);
+		state.reach = reach(problem, state.avail);
+	}
+	state.spaces = placeInSpaces(state.spaces, x, y, z, x + b.dx, y + b.dy, z + b.dz, top, state.min);
+}
+
+/** Drops space `si` (nothing fits there). */
+export function dropSpace(state: State, si: number): void {
+	state.spaces = state.spaces.slice(0, si).concat(state.spaces.slice(si + 1));
+}
