@@ -180,21 +180,68 @@ export function checkCartonLine(input: CartonLineInput): Problem[] {
 	return problems;
 }
 
-/** One line's cartons, numbered from `firstCarton`. */
-export function packCartons(input: CartonLineInput, firstCarton = 1): CartonLineResult {
-	const problems = checkCartonLine(input);
-	if (!isPositiveInt(firstCarton)) {
-		problems.push({ path: 'firstCarton', message: MESSAGES.positiveInt });
-	}
-	if (problems.length > 0) return { ok: false, problems };
+/**
+ * What every line of one product shares: its exact masses per carton and their output strings.
+ * Computed once per product, not per line (measure() of a 500-line shipment reuses them).
+ * The input must be valid (see `checkCartonLine`).
+ */
+export interface CartonProduct {
+	packaging: Packaging;
+	netPerUnit: Decimal;
+	fullGross: Decimal;
+	tare: Decimal;
+	cartonM3: Decimal;
+	carton: CartonLine['carton'];
+	fullNetKg: string;
+	/** The full carton's gross, every decimal kept (for chargeable-weight pieces). */
+	fullGrossExact: string;
+}
 
-	const { quantity, packaging } = input;
-	const upc = packaging.unitsPerCarton;
-	const count = countCartons(quantity, upc);
-	const masses = cartonMasses(input);
+export function cartonProduct(netKgPerUnit: string, packaging: Packaging): CartonProduct {
+	const netPerUnit = exact(netKgPerUnit);
+	const fullGross = exact(packaging.cartonGrossKg);
+	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
 	const cartonM3 = boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm);
-	const lastCarton = firstCarton + count.cartons - 1;
+	return {
+		packaging,
+		netPerUnit,
+		fullGross,
+		tare,
+		cartonM3,
+		carton: {
+			lengthMm: packaging.lengthMm,
+			widthMm: packaging.widthMm,
+			heightMm: packaging.heightMm,
+			volumeM3: m3Out(cartonM3),
+			tareKg: kgOut(tare),
+			fullGrossKg: kgOut(fullGross)
+		},
+		fullNetKg: kgOut(netPerUnit.times(packaging.unitsPerCarton)),
+		fullGrossExact: fullGross.toFixed()
+	};
+}
 
+/** One valid line's cartons and exact masses, from its product's shared figures. */
+export function packProductCartons(
+	product: CartonProduct,
+	quantity: number,
+	firstCarton: number
+): { line: CartonLine; masses: CartonMasses } {
+	const upc = product.packaging.unitsPerCarton;
+	const count = countCartons(quantity, upc);
+	const { netPerUnit, tare, fullGross } = product;
+	const net = netPerUnit.times(quantity);
+	const remainderGross =
+		count.remainderUnits > 0 ? tare.plus(netPerUnit.times(count.remainderUnits)) : null;
+	const masses: CartonMasses = {
+		netPerUnit,
+		tare,
+		fullGross,
+		remainderGross,
+		net,
+		gross: tare.times(count.cartons).plus(net)
+	};
+	const lastCarton = firstCarton + count.cartons - 1;
 	const groups: CartonGroup[] = [];
 	if (count.fullCartons > 0) {
 		groups.push({
@@ -202,23 +249,21 @@ export function packCartons(input: CartonLineInput, firstCarton = 1): CartonLine
 			toCarton: firstCarton + count.fullCartons - 1,
 			cartons: count.fullCartons,
 			unitsPerCarton: upc,
-			netKgPerCarton: kgOut(masses.netPerUnit.times(upc)),
-			grossKgPerCarton: kgOut(masses.fullGross)
+			netKgPerCarton: product.fullNetKg,
+			grossKgPerCarton: product.carton.fullGrossKg
 		});
 	}
-	if (masses.remainderGross !== null) {
+	if (remainderGross !== null) {
 		groups.push({
 			fromCarton: lastCarton,
 			toCarton: lastCarton,
 			cartons: 1,
 			unitsPerCarton: count.remainderUnits,
-			netKgPerCarton: kgOut(masses.netPerUnit.times(count.remainderUnits)),
-			grossKgPerCarton: kgOut(masses.remainderGross)
+			netKgPerCarton: kgOut(netPerUnit.times(count.remainderUnits)),
+			grossKgPerCarton: kgOut(remainderGross)
 		});
 	}
-
 	return {
-		ok: true,
 		line: {
 			quantity,
 			unitsPerCarton: upc,
@@ -226,19 +271,24 @@ export function packCartons(input: CartonLineInput, firstCarton = 1): CartonLine
 			firstCarton,
 			lastCarton,
 			groups,
-			carton: {
-				lengthMm: packaging.lengthMm,
-				widthMm: packaging.widthMm,
-				heightMm: packaging.heightMm,
-				volumeM3: m3Out(cartonM3),
-				tareKg: kgOut(masses.tare),
-				fullGrossKg: kgOut(masses.fullGross)
-			},
-			netKg: kgOut(masses.net),
+			carton: product.carton,
+			netKg: kgOut(net),
 			grossKg: kgOut(masses.gross),
-			volumeM3: m3Out(cartonM3.times(count.cartons))
-		}
+			volumeM3: m3Out(product.cartonM3.times(count.cartons))
+		},
+		masses
 	};
+}
+
+/** One line's cartons, numbered from `firstCarton`. */
+export function packCartons(input: CartonLineInput, firstCarton = 1): CartonLineResult {
+	const problems = checkCartonLine(input);
+	if (!isPositiveInt(firstCarton)) {
+		problems.push({ path: 'firstCarton', message: MESSAGES.positiveInt });
+	}
+	if (problems.length > 0) return { ok: false, problems };
+	const product = cartonProduct(input.netKgPerUnit, input.packaging);
+	return { ok: true, line: packProductCartons(product, input.quantity, firstCarton).line };
 }
 
 /**

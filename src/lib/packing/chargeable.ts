@@ -5,7 +5,18 @@
  * Pure module: no framework imports.
  */
 import type Decimal from 'decimal.js';
-import { ZERO, MM3_PER_M3, ceilToStep, exact, group, kgOut, m3Out, maxOf, show } from './exact';
+import {
+	M3_PER_MM3,
+	ZERO,
+	ceilToStep,
+	exact,
+	group,
+	kgOut,
+	m3Out,
+	maxOf,
+	show,
+	wholeProduct
+} from './exact';
 
 export const CHARGE_MODES = ['air', 'courier', 'sea_lcl', 'road', 'sea_fcl'] as const;
 export type ChargeMode = (typeof CHARGE_MODES)[number];
@@ -192,11 +203,9 @@ function totals(pieces: readonly ChargeablePiece[]): Totals {
 	let mm3 = ZERO;
 	for (const piece of pieces) {
 		grossKg = grossKg.plus(exact(piece.grossKg).times(piece.count));
-		mm3 = mm3.plus(
-			exact(piece.lengthMm).times(piece.widthMm).times(piece.heightMm).times(piece.count)
-		);
+		mm3 = mm3.plus(wholeProduct(piece.lengthMm, piece.widthMm, piece.heightMm, piece.count));
 	}
-	return { grossKg, volumeM3: mm3.dividedBy(MM3_PER_M3) };
+	return { grossKg, volumeM3: mm3.times(M3_PER_MM3) };
 }
 
 /** Up to this many pieces each get their own step line; more are grouped by their size. */
@@ -214,7 +223,7 @@ function roundedCm3(piece: ChargeablePiece) {
 	const l = mmToNearestCm(piece.lengthMm);
 	const w = mmToNearestCm(piece.widthMm);
 	const h = mmToNearestCm(piece.heightMm);
-	return { l, w, h, each: exact(l).times(w).times(h) };
+	return { l, w, h, each: wholeProduct(l, w, h) };
 }
 
 function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
@@ -409,6 +418,18 @@ export function chargeableWeights(
 ): ChargeableWeight[] {
 	checkPieces(pieces);
 	const t = totals(pieces);
+	return rules.map((rule) => weigh(pieces, rule, t));
+}
+
+/**
+ * As `chargeableWeights`, for a caller that already holds the pieces' exact totals (measure()
+ * sums them as it builds the pieces): the pieces are neither checked nor summed again.
+ */
+export function chargeableWeightsOfTotals(
+	pieces: readonly ChargeablePiece[],
+	t: { grossKg: Decimal; volumeM3: Decimal },
+	rules: readonly ChargeableRule[] = CHARGEABLE_RULES
+): ChargeableWeight[] {
 	return rules.map((rule) => weigh(pieces, rule, t));
 }
 

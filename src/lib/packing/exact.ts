@@ -32,6 +32,8 @@ export function exact(value: DecimalInput): Decimal {
 
 export const ZERO = new Exact(0);
 export const MM3_PER_M3 = new Exact('1e9');
+/** 1e-9 exactly: multiplying by it equals dividing by 1e9, without long division. */
+export const M3_PER_MM3 = new Exact('1e-9');
 
 /** Mass for output: kilograms to 3 decimals (gram precision), half up. */
 export function kgOut(kg: Decimal): string {
@@ -53,9 +55,20 @@ export function maxOf(a: Decimal, b: Decimal): Decimal {
 	return b.greaterThan(a) ? b : a;
 }
 
+/**
+ * The exact product of whole numbers. JS multiplies them exactly while the result stays a safe
+ * integer (a result past 2^53 is never reported as safe), so decimal.js is needed only beyond.
+ */
+export function wholeProduct(...factors: number[]): Decimal {
+	let product = 1;
+	for (const f of factors) product *= f;
+	if (Number.isSafeInteger(product)) return new Exact(product);
+	return factors.reduce((acc: Decimal, f) => acc.times(f), new Exact(1));
+}
+
 /** Volume in m³ of a box in whole millimetres, exact. */
 export function boxM3(lengthMm: number, widthMm: number, heightMm: number): Decimal {
-	return exact(lengthMm).times(widthMm).times(heightMm).dividedBy(MM3_PER_M3);
+	return wholeProduct(lengthMm, widthMm, heightMm).times(M3_PER_MM3);
 }
 
 /** Thousands separators (commas) in the integer part of a plain decimal string. */

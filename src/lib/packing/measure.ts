@@ -8,11 +8,24 @@
  *
  * Pure module: no framework imports.
  */
-import { chargeableWeights, type ChargeablePiece, type ChargeableWeight } from './chargeable';
-import { cartonMasses, packCartons, type CartonLine, type CartonTotals } from './cartons';
-import { ZERO, boxM3, exact, kgOut, m3Out } from './exact';
-import { planPalletsExact, type PalletPlan, type PalletSpec } from './pallets';
-import type { Problem } from './problem';
+import {
+	chargeableWeightsOfTotals,
+	type ChargeablePiece,
+	type ChargeableWeight
+} from './chargeable';
+import {
+	cartonProduct,
+	checkCartonLine,
+	packProductCartons,
+	type CartonLine,
+	type CartonMasses,
+	type CartonProduct,
+	type CartonTotals,
+	type Packaging
+} from './cartons';
+import { ZERO, exact, kgOut, m3Out } from './exact';
+import { palletStowage, planPalletsOfMasses, type PalletPlan, type PalletSpec } from './pallets';
+import { MESSAGES, isPositiveInt, type Problem } from './problem';
 import { measureInputSchema, type MeasureInput } from './schema';
 
 export interface MeasuredLine extends CartonLine {
@@ -70,39 +83,54 @@ export function measure(input: MeasureInput): MeasureResult {
 	const problems: Problem[] = [];
 	let nextCarton = 1;
 	let units = 0;
-	let net = ZERO;
-	let gross = ZERO;
-	let volume = ZERO;
-	const masses: ReturnType<typeof cartonMasses>[] = [];
+	const sumsBySku = new Map<string, { facts: CartonProduct; quantity: number; cartons: number }>();
+	const masses: CartonMasses[] = [];
+
+	// Per product, once: its problems (reported on every line that uses it) or its shared figures.
+	const perProduct = new Map<string, { problems: Problem[] } | { facts: CartonProduct }>();
+	const productFacts = (sku: string, netKgPerUnit: string, packaging: Packaging) => {
+		let entry = perProduct.get(sku);
+		if (entry === undefined) {
+			const found = checkCartonLine({ quantity: 1, netKgPerUnit, packaging });
+			entry =
+				found.length > 0 ? { problems: found } : { facts: cartonProduct(netKgPerUnit, packaging) };
+			perProduct.set(sku, entry);
+		}
+		return entry;
+	};
 
 	lines.forEach((line, lineIndex) => {
 		const product = bySku.get(line.sku);
 		const packaging = product?.packaging;
 		// The schema has already reported these; the guard keeps the types honest.
 		if (product === undefined || packaging === undefined || packaging === null) return;
-		const lineInput = { quantity: line.quantity, netKgPerUnit: product.netKgPerUnit, packaging };
-		const packed = packCartons(lineInput, nextCarton);
-		if (!packed.ok) {
+		const entry = productFacts(line.sku, product.netKgPerUnit, packaging);
+		if ('problems' in entry || !isPositiveInt(line.quantity)) {
+			const found = [
+				...(isPositiveInt(line.quantity)
+					? []
+					: [{ path: 'quantity', message: MESSAGES.positiveInt }]),
+				...('problems' in entry ? entry.problems : [])
+			];
 			problems.push(
-				...packed.problems.map((p) => ({
-					path: `lines.${lineIndex}.${p.path}`,
-					message: p.message
-				}))
+				...found.map((p) => ({ path: `lines.${lineIndex}.${p.path}`, message: p.message }))
 			);
 			return;
 		}
-		const c = packed.line;
-		measured.push({ lineIndex, sku: line.sku, ...c });
+		const { facts } = entry;
+		const { line: c, masses: m } = packProductCartons(facts, line.quantity, nextCarton);
+		measured.push(Object.assign({ lineIndex, sku: line.sku }, c));
 		nextCarton = c.lastCarton + 1;
-
-		const m = cartonMasses(lineInput);
 		masses.push(m);
 		units += line.quantity;
-		net = net.plus(m.net);
-		gross = gross.plus(m.gross);
-		volume = volume.plus(
-			boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm).times(c.cartons)
-		);
+		// Totals per product in whole numbers; the decimals are multiplied once per product below.
+		const sums = sumsBySku.get(line.sku);
+		if (sums) {
+			sums.quantity += line.quantity;
+			sums.cartons += c.cartons;
+		} else {
+			sumsBySku.set(line.sku, { facts, quantity: line.quantity, cartons: c.cartons });
+		}
 		const dims = {
 			lengthMm: packaging.lengthMm,
 			widthMm: packaging.widthMm,
@@ -112,7 +140,7 @@ export function measure(input: MeasureInput): MeasureResult {
 		if (c.fullCartons > 0) {
 			cartonPieces.push({
 				...dims,
-				grossKg: m.fullGross.toFixed(),
+				grossKg: facts.fullGrossExact,
 				count: c.fullCartons,
 				label: `${label}, ${range('carton', c.firstCarton, c.firstCarton + c.fullCartons - 1)}`
 			});
@@ -127,41 +155,67 @@ export function measure(input: MeasureInput): MeasureResult {
 		}
 	});
 	if (problems.length > 0) return { ok: false, problems };
+	let net = ZERO;
+	let gross = ZERO;
+	let volume = ZERO;
+	for (const { facts, quantity, cartons } of sumsBySku.values()) {
+		const productNet = facts.netPerUnit.times(quantity);
+		net = net.plus(productNet);
+		gross = gross.plus(facts.tare.times(cartons)).plus(productNet);
+		volume = volume.plus(facts.cartonM3.times(cartons));
+	}
 
 	let pallets: MeasuredPallets | null = null;
 	let pieces = cartonPieces;
+	let pieceTotals = { grossKg: gross, volumeM3: volume };
 	if (pallet !== undefined) {
 		const palletPieces: ChargeablePiece[] = [];
 		const planned: MeasuredPallets['lines'] = [];
 		let nextPallet = 1;
 		let palletGross = ZERO;
 		let palletVolume = ZERO;
+		const stowageBySku = new Map<string, ReturnType<typeof palletStowage>>();
+		const palletTare = exact(pallet.tareKg);
 		measured.forEach((line, i) => {
 			const packaging = bySku.get(line.sku)?.packaging;
 			const m = masses[i];
 			if (packaging === undefined || packaging === null || m === undefined) return;
-			const result = planPalletsExact({
-				pallet,
-				carton: {
-					lengthMm: packaging.lengthMm,
-					widthMm: packaging.widthMm,
-					heightMm: packaging.heightMm,
-					grossKg: packaging.cartonGrossKg,
-					orientation: packaging.orientation,
-					maxLoadOnTopKg: packaging.maxLoadOnTopKg
-				},
-				cartons: line.cartons,
-				...(m.remainderGross === null ? {} : { lastCartonGrossKg: m.remainderGross.toFixed() }),
-				firstCarton: line.firstCarton,
-				firstPallet: nextPallet
-			});
-			if (!result.ok) {
+			const carton = {
+				lengthMm: packaging.lengthMm,
+				widthMm: packaging.widthMm,
+				heightMm: packaging.heightMm,
+				grossKg: packaging.cartonGrossKg,
+				orientation: packaging.orientation,
+				maxLoadOnTopKg: packaging.maxLoadOnTopKg
+			};
+			// The stowage depends on the product only: searched once per product.
+			let stowage = stowageBySku.get(line.sku);
+			if (stowage === undefined) {
+				stowage = palletStowage(pallet, carton);
+				stowageBySku.set(line.sku, stowage);
+			}
+			if (!stowage.ok) {
 				problems.push({
 					path: 'pallet',
-					message: `Line ${line.lineIndex + 1} (SKU “${line.sku}”): ${result.message}`
+					message: `Line ${line.lineIndex + 1} (SKU “${line.sku}”): ${stowage.message}`
 				});
 				return;
 			}
+			const result = planPalletsOfMasses(
+				{
+					pallet,
+					carton,
+					cartons: line.cartons,
+					firstCarton: line.firstCarton,
+					firstPallet: nextPallet
+				},
+				stowage.stowage,
+				{
+					cartonGross: m.fullGross,
+					lastCartonGross: m.remainderGross ?? m.fullGross,
+					palletTare
+				}
+			);
 			planned.push({ lineIndex: line.lineIndex, sku: line.sku, plan: result.plan });
 			nextPallet = result.plan.lastPallet + 1;
 			palletGross = palletGross.plus(result.exact.gross);
@@ -191,6 +245,7 @@ export function measure(input: MeasureInput): MeasureResult {
 			volumeM3: m3Out(palletVolume)
 		};
 		pieces = palletPieces;
+		pieceTotals = { grossKg: palletGross, volumeM3: palletVolume };
 	}
 
 	return {
@@ -204,7 +259,7 @@ export function measure(input: MeasureInput): MeasureResult {
 			volumeM3: m3Out(volume)
 		},
 		pallets,
-		chargeable: chargeableWeights(pieces),
+		chargeable: chargeableWeightsOfTotals(pieces, pieceTotals),
 		problems: []
 	};
 }

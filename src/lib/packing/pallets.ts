@@ -339,17 +339,25 @@ export function palletStowage(
 	};
 }
 
+/** The masses a plan multiplies, already exact (kg). */
+export interface PalletPlanMasses {
+	cartonGross: Decimal;
+	lastCartonGross: Decimal;
+	palletTare: Decimal;
+}
+
 function planExact(
-	input: PalletPlanInput,
-	stowage: PalletStowage
+	input: Omit<PalletPlanInput, 'lastCartonGrossKg'>,
+	stowage: PalletStowage,
+	masses: PalletPlanMasses
 ): { plan: PalletPlan; exact: PalletPlanExact } {
-	const { pallet, carton, cartons } = input;
+	const { pallet, cartons } = input;
 	const firstCarton = input.firstCarton ?? 1;
 	const firstPallet = input.firstPallet ?? 1;
 	const perPallet = stowage.cartonsPerPallet;
-	const gross = exact(carton.grossKg);
-	const lastGross = exact(input.lastCartonGrossKg ?? carton.grossKg);
-	const tare = exact(pallet.tareKg);
+	const gross = masses.cartonGross;
+	const lastGross = masses.lastCartonGross;
+	const tare = masses.palletTare;
 	const pallets = Math.ceil(cartons / perPallet);
 	const lastCount = cartons - (pallets - 1) * perPallet;
 	const heightFor = (n: number): number =>
@@ -440,11 +448,38 @@ function checkPlanInput(input: PalletPlanInput): Problem[] {
 export function planPalletsExact(
 	input: PalletPlanInput
 ): { ok: true; plan: PalletPlan; exact: PalletPlanExact } | PalletError {
-	const stowage = palletStowage(input.pallet, input.carton);
+	return planPalletsWithStowage(input, palletStowage(input.pallet, input.carton));
+}
+
+/**
+ * As `planPalletsExact`, with the stowage already worked out by `palletStowage` for this pallet
+ * and carton (measure() does that once per product, not once per line).
+ */
+export function planPalletsWithStowage(
+	input: PalletPlanInput,
+	stowage: ReturnType<typeof palletStowage>
+): { ok: true; plan: PalletPlan; exact: PalletPlanExact } | PalletError {
 	const problems = [...(stowage.ok ? [] : stowage.problems), ...checkPlanInput(input)];
 	if (problems.length > 0) return invalid(problems);
 	if (!stowage.ok) return stowage;
-	return { ok: true, ...planExact(input, stowage.stowage) };
+	const masses = {
+		cartonGross: exact(input.carton.grossKg),
+		lastCartonGross: exact(input.lastCartonGrossKg ?? input.carton.grossKg),
+		palletTare: exact(input.pallet.tareKg)
+	};
+	return { ok: true, ...planExact(input, stowage.stowage, masses) };
+}
+
+/**
+ * For measure(), whose cartons are valid by construction: the stowage found once per product
+ * and the masses already exact, so nothing is checked or parsed again per line.
+ */
+export function planPalletsOfMasses(
+	input: Omit<PalletPlanInput, 'lastCartonGrossKg'>,
+	stowage: PalletStowage,
+	masses: PalletPlanMasses
+): { plan: PalletPlan; exact: PalletPlanExact } {
+	return planExact(input, stowage, masses);
 }
 
 /** Pallets for `cartons` cartons of one line: full pallets and at most one part pallet. */
