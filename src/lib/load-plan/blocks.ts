@@ -189,6 +189,26 @@ function combine(
 	};
 }
 
+const SIDE = [1, 2] as const;
+const STACK = [3] as const;
+
+/** Indices of all[0..to) sorted by `f`, with the sorted keys. */
+function sortedBy(all: readonly Block[], to: number, f: (b: Block) => number) {
+	const order = Array.from({ length: to }, (_, i) => i).sort((p, q) => f(all[p]!) - f(all[q]!));
+	return { order, keys: Float64Array.from(order, (i) => f(all[i]!)) };
+}
+
+function lowerBound(keys: Float64Array, v: number): number {
+	let lo = 0;
+	let hi = keys.length;
+	while (lo < hi) {
+		const mid = (lo + hi) >> 1;
+		if (keys[mid]! < v) lo = mid + 1;
+		else hi = mid;
+	}
+	return lo;
+}
+
 /** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
 function compareBlocks(p: Block, q: Block, keys: Map<Block, string>): number {
 	if (p.vol !== q.vol) return q.vol - p.vol;
@@ -229,17 +249,28 @@ export function generateBlocks(
 	let from = 0;
 	while (all.length < limits.maxBlocks && from < all.length) {
 		const to = all.length;
+		// Partners are looked up in windows: side by side only with nearly the same height,
+		// stacked only with nearly the same footprint (others rarely reach MIN_FILL).
+		const byHeight = sortedBy(all, to, (b) => b.dz);
+		const byArea = sortedBy(all, to, (b) => b.dx * b.dy);
+		const tryPair = (ob: Block, nb: Block, kind: 1 | 2 | 3): boolean => {
+			const g1 = combine(ob, nb, kind, c, types);
+			if (g1 !== null && add(g1) && all.length >= limits.maxBlocks) return true;
+			if (ob === nb) return false;
+			const g2 = combine(nb, ob, kind, c, types);
+			return g2 !== null && add(g2) && all.length >= limits.maxBlocks;
+		};
 		outer: for (let j = from; j < to; j++) {
 			const nb = all[j]!;
-			for (let i = 0; i < to; i++) {
-				if (i >= from && i < j) continue; // this pair was tried in row i
-				const ob = all[i]!;
-				for (let kind = 1 as 1 | 2 | 3; kind <= 3; kind++) {
-					const g1 = combine(ob, nb, kind, c, types);
-					if (g1 !== null && add(g1) && all.length >= limits.maxBlocks) break outer;
-					if (ob === nb) continue;
-					const g2 = combine(nb, ob, kind, c, types);
-					if (g2 !== null && add(g2) && all.length >= limits.maxBlocks) break outer;
+			for (const [index, key, kinds] of [
+				[byHeight, nb.dz, SIDE] as const,
+				[byArea, nb.dx * nb.dy, STACK] as const
+			]) {
+				const lo = lowerBound(index.keys, key * MIN_FILL);
+				for (let k = lo; k < index.keys.length && index.keys[k]! <= key / MIN_FILL; k++) {
+					const i = index.order[k]!;
+					if (i >= from && i < j) continue; // this pair was tried in row i
+					for (const kind of kinds) if (tryPair(all[i]!, nb, kind)) break outer;
 				}
 			}
 			if ((j & 15) === 0 && performance.now() > limits.deadline) break;

@@ -78,7 +78,8 @@ function sequence(
 			o.maxContainers - fills.length,
 			Math.ceil(volumeLeft(items, remaining) / (c.volume * 0.85))
 		);
-		const slice = Math.max(0, deadline - performance.now()) / (Math.max(1, expected) + 1);
+		const parts = Math.max(1, expected) + (alts.length > 0 ? 1 : 0);
+		const slice = Math.max(0, deadline - performance.now()) / parts;
 		let fill = fillContainer(items, remaining, c, performance.now() + slice, o.seed);
 		let type = primary;
 		if (fill.stoppedBy === 'time') stoppedBy = 'time';

@@ -50,6 +50,7 @@ export interface BlockTable {
 	dx: Int32Array;
 	dy: Int32Array;
 	dz: Int32Array;
+	vol: Float64Array;
 }
 
 export function blockTable(list: readonly Block[]): BlockTable {
@@ -57,7 +58,8 @@ export function blockTable(list: readonly Block[]): BlockTable {
 		list,
 		dx: Int32Array.from(list, (b) => b.dx),
 		dy: Int32Array.from(list, (b) => b.dy),
-		dz: Int32Array.from(list, (b) => b.dz)
+		dz: Int32Array.from(list, (b) => b.dz),
+		vol: Float64Array.from(list, (b) => b.vol)
 	};
 }
 
@@ -93,12 +95,14 @@ function fittingBlocks(
 	const sx = s.x2 - s.x1;
 	const sy = s.y2 - s.y1;
 	const sz = s.z2 - s.z1;
-	const { dx, dy, dz, list } = blocks;
+	const { dx, dy, dz, vol, list } = blocks;
 	const n = list.length;
 	const payload = problem.container.payload;
 	const top: Block[] = [];
 	const score: number[] = [];
 	for (let i = 0; i < n; i++) {
+		// Fitness never exceeds volume and the list is by volume: nothing later can enter the top.
+		if (top.length === k && vol[i]! <= score[k - 1]!) break;
 		if (dx[i]! > sx || dy[i]! > sy || dz[i]! > sz) continue;
 		const b = list[i]!;
 		const f = fitness(state, sx, sy, sz, b);
