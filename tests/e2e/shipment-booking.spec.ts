@@ -380,6 +380,28 @@ test.describe('one editor saving repeatedly', () => {
 		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
 	});
 
+	test('saving one form keeps what is typed, unsaved, in the other', async ({ page }) => {
+		const lines = linesRegion(page);
+		const header = headerRegion(page);
+		await addLine(page, 1, PEBBLE, '36');
+		await header.getByLabel('Carrier').fill('Demo Air Cargo');
+		await header.getByRole('button', { name: 'Save shipment' }).click();
+		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
+		// The header's save reloaded the page data; the typed line is still there, still unsaved.
+		await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('36');
+		await expect(lines.getByText('Unsaved changes')).toBeVisible();
+
+		await header.getByLabel('Carrier').fill('Demo Sea Lines');
+		await saveLines(page);
+		await expect(lines.getByRole('status')).toHaveText('1 line(s) saved.');
+		await expect(header.getByLabel('Carrier')).toHaveValue('Demo Sea Lines');
+		await header.getByRole('button', { name: 'Save shipment' }).click();
+		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
+		await page.reload();
+		await expect(header.getByLabel('Carrier')).toHaveValue('Demo Sea Lines');
+		await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('36');
+	});
+
 	test('removing every line in the editor empties the live totals', async ({ page }) => {
 		const lines = linesRegion(page);
 		const measures = measuresRegion(page);
