@@ -268,6 +268,25 @@ describe('saveProduct refusals', () => {
 		expect(await countSku(input.sku)).toBe(0);
 	});
 
+	it('refuses a this-way-up carton taller than every container door (fieldErrors.cartonHeight), no row', async () => {
+		// The seeded container types' door openings are at most 2577 mm high (data/container-types.json).
+		const input = productInput({
+			cartonLength: '1000',
+			cartonWidth: '800',
+			cartonHeight: '2600',
+			cartonGrossWeight: '80'
+		});
+		const before = await countRows('products');
+		const result = refused(await saveProduct(coordinator, null, input, IP));
+		expect(result.status).toBe(400);
+		expect(Object.keys(result.fieldErrors)).toEqual(['cartonHeight']);
+		expect(result.fieldErrors.cartonHeight).toMatch(/does not pass the door of any container/);
+		expect(await countRows('products')).toBe(before);
+		// The same carton may be laid on its side: then it goes in.
+		const row = await createProduct({ ...input, sku: uniqueSku(), orientation: 'any' });
+		expect(row.packaging?.cartonHeightMm).toBe(2600);
+	});
+
 	it('accepts a carton gross equal to the contents', async () => {
 		const row = await createProduct(productInput({ cartonGrossWeight: '7.44' }));
 		expect(row.packaging?.cartonGrossKg).toBe('7.440');

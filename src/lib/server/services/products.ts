@@ -3,7 +3,8 @@ import { col, fn, Op, QueryTypes, UniqueConstraintError, where } from 'sequelize
 import type { ProductInput } from '../../schemas/products';
 import { lbToKg, inchesToMm } from '../../packing/units';
 import type { SessionUser } from '../auth/session-user';
-import { Product, ProductPackaging, type BatteryConfig } from '../db/models';
+import { ContainerTypeRow, Product, ProductPackaging, type BatteryConfig } from '../db/models';
+import { doorProblem } from '../../packing/door';
 import { recordAudit } from './audit';
 import { invalid, type ServiceResult } from './result';
 
@@ -166,13 +167,33 @@ function checkCartonWeight(input: ProductInput) {
 	return null;
 }
 
+/** A carton no container door takes cannot go by sea container or be stuffed at all. */
+async function checkCartonDoor(input: ProductInput) {
+	const packaging = packagingFields(input);
+	if (!packaging) return null;
+	const containers = await ContainerTypeRow.findAll({ raw: true });
+	const message = doorProblem(
+		{
+			lengthMm: packaging.cartonLengthMm,
+			widthMm: packaging.cartonWidthMm,
+			heightMm: packaging.cartonHeightMm,
+			orientation: packaging.orientation
+		},
+		containers
+	);
+	if (!message) return null;
+	return invalid(
+		packaging.orientation === 'this_way_up' ? { cartonHeight: message } : { cartonLength: message }
+	);
+}
+
 export async function saveProduct(
 	actor: SessionUser,
 	id: string | null,
 	input: ProductInput,
 	ip: string | null
 ): Promise<ServiceResult<ProductRow>> {
-	const weightProblem = checkCartonWeight(input);
+	const weightProblem = checkCartonWeight(input) ?? (await checkCartonDoor(input));
 	if (weightProblem) return weightProblem;
 	try {
 		const savedId = await Product.sequelize!.transaction(async (transaction) => {
