@@ -1,4 +1,4 @@
-import Papa from 'papaparse';
+import { cell, readCsv } from './csv';
 
 // Parses a CSV of shipment lines (sku, quantity, optional unit_price) against the known products.
 // Pure: the page previews the result; nothing is saved until the user confirms and saves.
@@ -19,13 +19,7 @@ const HEADERS = {
 };
 
 export function parseLinesCsv(text: string, products: { id: string; sku: string }[]) {
-	const parsed = Papa.parse<Record<string, string>>(text.trim(), {
-		header: true,
-		skipEmptyLines: 'greedy',
-		transformHeader: (h) => h.trim().toLowerCase().replace(/\s+/g, '_')
-	});
-	const fields = parsed.meta.fields ?? [];
-	const column = (names: string[]) => fields.find((f) => names.includes(f));
+	const { records, column, parseError } = readCsv(text);
 	const skuColumn = column(HEADERS.sku);
 	const quantityColumn = column(HEADERS.quantity);
 	const priceColumn = column(HEADERS.unitPrice);
@@ -36,17 +30,17 @@ export function parseLinesCsv(text: string, products: { id: string; sku: string 
 		};
 	}
 	const bySku = new Map(products.map((p) => [p.sku.toLowerCase(), p.id]));
-	const rows: CsvLineRow[] = parsed.data.map((record, index) => {
+	const rows: CsvLineRow[] = records.map((record, index) => {
 		const errors: string[] = [];
-		const sku = (record[skuColumn] ?? '').trim();
+		const sku = cell(record, skuColumn);
 		const productId = bySku.get(sku.toLowerCase()) ?? null;
 		if (!sku) errors.push('SKU is empty.');
 		else if (!productId) errors.push(`No product with SKU “${sku}”.`);
-		const rawQuantity = (record[quantityColumn] ?? '').trim();
+		const rawQuantity = cell(record, quantityColumn);
 		const quantity = /^\d{1,8}$/.test(rawQuantity) ? Number(rawQuantity) : null;
 		if (quantity === null || quantity < 1)
 			errors.push(`Quantity “${rawQuantity}” must be a whole number of at least 1.`);
-		const unitPrice = priceColumn ? (record[priceColumn] ?? '').trim() : '';
+		const unitPrice = cell(record, priceColumn);
 		if (unitPrice && !/^\d{1,10}(\.\d{1,4})?$/.test(unitPrice)) {
 			errors.push(`Unit price “${unitPrice}” must be a number with a dot and at most 4 decimals.`);
 		}
@@ -59,6 +53,5 @@ export function parseLinesCsv(text: string, products: { id: string; sku: string 
 			errors
 		};
 	});
-	const parseErrors = parsed.errors.map((e) => `Row ${(e.row ?? 0) + 2}: ${e.message}`);
-	return { rows, fileError: parseErrors[0] ?? null };
+	return { rows, fileError: parseError };
 }

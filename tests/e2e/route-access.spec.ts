@@ -157,6 +157,12 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			},
 			{
 				method: 'POST',
+				path: '/shipments/:ship?/importLots',
+				form: { lots: '' },
+				expect: EDITOR_ACTION
+			},
+			{
+				method: 'POST',
 				path: '/shipments/:ship?/removeLot',
 				form: { lotId: 'x' },
 				expect: EDITOR_ACTION

@@ -1,64 +1,25 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
+import { expect, test, type Browser } from '@playwright/test';
 import { DEMO, signInPage } from './helpers';
+import {
+	COORDINATOR_NAME,
+	HUB,
+	PEBBLE,
+	POWER_BANK,
+	REFERENCE,
+	addLine,
+	containersRegion,
+	createDraftShipment,
+	headerRegion,
+	linesRegion,
+	measuresRegion,
+	productValue,
+	saveLines,
+	statusRegion
+} from './shipment-steps';
 
 // A coordinator books a shipment end to end in the browser: header, lines (typed and from a
 // CSV file) with live cartons and weights, status, containers, the list; plus bad input and two
 // editors saving the same shipment. The demo catalogue figures are in seeders/demo-catalogue.ts.
-
-const REFERENCE = /SHP-\d{4}-\d{5}/;
-const COORDINATOR_NAME = 'Daniel Tan Wei Jie';
-const PEBBLE = 'SLV-PBL-20 — Pebble 20 portable speaker, rechargeable, blue';
-const POWER_BANK = 'SLV-PWR-20K — Ridge 20000 mAh power bank, USB-C';
-const HUB = 'SLV-HUB-01 — Hearth smart-home hub, mains powered (packaging not yet measured)';
-
-const region = (page: Page, name: string) => page.getByRole('region', { name, exact: true });
-const linesRegion = (page: Page) => region(page, 'Lines');
-const measuresRegion = (page: Page) => region(page, 'Cartons, weights and chargeable weight');
-const statusRegion = (page: Page) => region(page, 'Status');
-const headerRegion = (page: Page) => region(page, 'Parties, terms and transport');
-const containersRegion = (page: Page) => region(page, 'Containers and seals');
-
-/** The value (product id) of the option with this label in a line's product select. */
-async function productValue(page: Page, line: number, label: string) {
-	const value = await linesRegion(page)
-		.getByLabel(`Product of line ${line}`)
-		.getByRole('option', { name: label, exact: true })
-		.getAttribute('value');
-	expect(value, `option ${label}`).toBeTruthy();
-	return value!;
-}
-
-/** Fills the new-shipment form as the brief's booking and submits it; returns the page's URL. */
-async function createDraftShipment(page: Page): Promise<{ url: string; reference: string }> {
-	await page.goto('/shipments');
-	await page.getByRole('link', { name: 'New shipment' }).click();
-	await expect(page.getByRole('heading', { level: 1, name: 'New shipment' })).toBeVisible();
-
-	await page.getByLabel('Customer (buyer)').selectOption({ label: 'Hallvik Heimtechnik GmbH' });
-	await page.getByLabel('Incoterms® 2020 rule').selectOption('FCA');
-	await page.getByLabel('Named place').fill('Port Klang');
-	await page.getByLabel('From', { exact: true }).selectOption({ label: 'MYPKG — Port Klang' });
-	await page.getByLabel('To', { exact: true }).selectOption({ label: 'DEHAM — Hamburg' });
-	await expect(page.getByLabel('Currency')).toHaveValue('USD');
-	await page.getByRole('button', { name: 'Create draft shipment' }).click();
-
-	await expect(page).toHaveURL(/\/shipments\/[0-9a-f-]{36}$/);
-	const heading = page.getByRole('heading', { level: 1 });
-	await expect(heading).toHaveText(REFERENCE);
-	return { url: page.url(), reference: (await heading.textContent())!.trim() };
-}
-
-/** Adds one line in the editor (not saved). */
-async function addLine(page: Page, line: number, product: string, quantity: string) {
-	const lines = linesRegion(page);
-	await lines.getByRole('button', { name: 'Add line' }).click();
-	await lines.getByLabel(`Product of line ${line}`).selectOption({ label: product });
-	await lines.getByLabel(`Quantity of line ${line}`).fill(quantity);
-}
-
-async function saveLines(page: Page) {
-	await linesRegion(page).getByRole('button', { name: 'Save lines' }).click();
-}
 
 async function signedInPage(browser: Browser) {
 	const context = await browser.newContext();

@@ -117,45 +117,64 @@ export const shipmentListQuerySchema = z.object({
 export type ShipmentListQuery = z.infer<typeof shipmentListQuerySchema>;
 
 /** One lot (and optionally a serial-number range) packed in a carton range of the shipment. */
+const lotFields = {
+	productId: z.uuid({ error: 'Choose the product.' }),
+	cartonFrom: positiveInt('First carton', 1_000_000),
+	cartonTo: positiveInt('Last carton', 1_000_000),
+	lotNumber: z.string().trim().min(1, 'Enter the lot number.').max(40),
+	serialFrom: shortText('First serial number', 40),
+	serialTo: shortText('Last serial number', 40)
+};
+
+type LotFields = { cartonFrom: number; cartonTo: number; serialFrom: string; serialTo: string };
+
+function checkLot(lot: LotFields, ctx: z.RefinementCtx) {
+	if (lot.cartonTo < lot.cartonFrom) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['cartonTo'],
+			message: 'The last carton comes before the first.'
+		});
+	}
+	if (Boolean(lot.serialFrom) !== Boolean(lot.serialTo)) {
+		const path = lot.serialFrom ? 'serialTo' : 'serialFrom';
+		ctx.addIssue({
+			code: 'custom',
+			path: [path],
+			message: 'Give both ends of the serial range, or neither.'
+		});
+	} else if (lot.serialFrom && lot.serialTo) {
+		if (lot.serialFrom.length !== lot.serialTo.length) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['serialTo'],
+				message: 'Both serial numbers need the same length, e.g. PB20-000001 to PB20-000500.'
+			});
+		} else if (lot.serialFrom > lot.serialTo) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['serialTo'],
+				message: 'The last serial number comes before the first.'
+			});
+		}
+	}
+}
+
+/** One lot without the shipment's version: a row of a CSV import. */
+export const lotRowSchema = z.object(lotFields).superRefine(checkLot);
+export type LotRowInput = z.infer<typeof lotRowSchema>;
+
 export const lotSchema = z
-	.object({
-		productId: z.uuid({ error: 'Choose the product.' }),
-		cartonFrom: positiveInt('First carton', 1_000_000),
-		cartonTo: positiveInt('Last carton', 1_000_000),
-		lotNumber: z.string().trim().min(1, 'Enter the lot number.').max(40),
-		serialFrom: shortText('First serial number', 40),
-		serialTo: shortText('Last serial number', 40),
-		version: z.number().int().min(0)
-	})
-	.superRefine((lot, ctx) => {
-		if (lot.cartonTo < lot.cartonFrom) {
-			ctx.addIssue({
-				code: 'custom',
-				path: ['cartonTo'],
-				message: 'The last carton comes before the first.'
-			});
-		}
-		if (Boolean(lot.serialFrom) !== Boolean(lot.serialTo)) {
-			const path = lot.serialFrom ? 'serialTo' : 'serialFrom';
-			ctx.addIssue({
-				code: 'custom',
-				path: [path],
-				message: 'Give both ends of the serial range, or neither.'
-			});
-		} else if (lot.serialFrom && lot.serialTo) {
-			if (lot.serialFrom.length !== lot.serialTo.length) {
-				ctx.addIssue({
-					code: 'custom',
-					path: ['serialTo'],
-					message: 'Both serial numbers need the same length, e.g. PB20-000001 to PB20-000500.'
-				});
-			} else if (lot.serialFrom > lot.serialTo) {
-				ctx.addIssue({
-					code: 'custom',
-					path: ['serialTo'],
-					message: 'The last serial number comes before the first.'
-				});
-			}
-		}
-	});
+	.object({ ...lotFields, version: z.number().int().min(0) })
+	.superRefine(checkLot);
+
+/** Lots from a CSV file, added together or not at all. */
+export const MAX_LOTS_PER_IMPORT = 500;
+export const lotImportSchema = z.object({
+	lots: z
+		.array(lotRowSchema)
+		.min(1, 'The file has no lots to add.')
+		.max(MAX_LOTS_PER_IMPORT, `At most ${MAX_LOTS_PER_IMPORT} lots per file.`),
+	version: z.number().int().min(0)
+});
 export type LotInput = z.infer<typeof lotSchema>;

@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { measure } from '../../packing';
 import { measureInputFrom } from '../../packing-input';
-import type { LotInput } from '../../schemas/shipments';
+import type { LotInput, LotRowInput } from '../../schemas/shipments';
 import type { SessionUser } from '../auth/session-user';
 import { Shipment } from '../db/models';
 import { recordAudit } from './audit';
@@ -30,69 +30,113 @@ export async function listLots(shipmentId: string): Promise<LotRow[]> {
 	);
 }
 
-/** Records a lot in a carton range; the range must lie within the cartons of that product's lines. */
+type LotProblem = { field: 'productId' | 'cartonTo'; message: string };
+
+/** Why this lot cannot be recorded on a shipment whose product carton ranges are `ranges`. */
+function lotProblem(
+	lot: LotRowInput,
+	ranges: Map<string, (readonly [number, number])[]>
+): LotProblem | null {
+	const own = ranges.get(lot.productId) ?? [];
+	if (own.length === 0)
+		return { field: 'productId', message: 'This product is not on the shipment.' };
+	if (own.some(([from, to]) => lot.cartonFrom >= from && lot.cartonTo <= to)) return null;
+	const text = own.map(([from, to]) => `${from}–${to}`).join(', ');
+	return { field: 'cartonTo', message: `This product is in cartons ${text}.` };
+}
+
+/**
+ * Records lots in carton ranges, all or none; each range must lie within the cartons of that
+ * product's lines. One lot (the typed form) gets field errors; several (a CSV file) a message
+ * naming the rows.
+ */
+export async function addLots(
+	actor: SessionUser,
+	shipmentId: string,
+	lots: LotRowInput[],
+	version: number,
+	ip: string | null
+): Promise<ServiceResult<{ ids: string[] }>> {
+	if (!canEditShipments(actor))
+		return fail(403, 'Only coordinators and administrators record lots.');
+	const shipment = await getShipment(actor, shipmentId);
+	if (!shipment) return fail(404, 'No shipment with this id is visible to you.');
+	if (shipment.version !== version)
+		return fail(409, 'Someone else changed this shipment. Reload and try again.');
+	const products = await productsBySku(shipment.lines.map((l) => l.sku));
+	const result = measure(measureInputFrom([...products.values()], shipment.lines, null));
+	if (!result.ok) return fail(400, 'Measure the lines first: some products have no packaging.');
+	const ranges = new Map<string, (readonly [number, number])[]>();
+	for (const line of result.lines) {
+		const productId = shipment.lines[line.lineIndex]?.productId;
+		if (!productId) continue;
+		ranges.set(productId, [...(ranges.get(productId) ?? []), [line.firstCarton, line.lastCarton]]);
+	}
+	const problems = lots.map((lot) => lotProblem(lot, ranges));
+	const first = problems.find((p) => p !== null);
+	if (first) {
+		if (lots.length === 1) {
+			return fail(400, 'Check the highlighted fields.', { [first.field]: first.message });
+		}
+		const rows = problems
+			.map((p, i) => (p ? `row ${i + 2} (lot ${lots[i]!.lotNumber}): ${p.message}` : null))
+			.filter((text): text is string => text !== null);
+		const more = rows.length > 5 ? ` And ${rows.length - 5} more.` : '';
+		return fail(
+			400,
+			`Nothing was added: ${rows.length} of ${lots.length} lots do not fit this shipment — ` +
+				`${rows.slice(0, 5).join('; ')}.${more}`
+		);
+	}
+	const ids = await Shipment.sequelize!.transaction(async (transaction) => {
+		const added: string[] = [];
+		for (const lot of lots) {
+			const [row] = await Shipment.sequelize!.query<{ id: string }>(
+				`INSERT INTO shipment_lots (shipment_id, product_id, carton_from, carton_to, lot_number, serial_from, serial_to, created_by)
+				 VALUES (:shipmentId, :productId, :cartonFrom, :cartonTo, :lotNumber, :serialFrom, :serialTo, :actor) RETURNING id`,
+				{
+					type: QueryTypes.SELECT,
+					transaction,
+					replacements: {
+						shipmentId,
+						productId: lot.productId,
+						cartonFrom: lot.cartonFrom,
+						cartonTo: lot.cartonTo,
+						lotNumber: lot.lotNumber,
+						serialFrom: lot.serialFrom || null,
+						serialTo: lot.serialTo || null,
+						actor: actor.id
+					}
+				}
+			);
+			added.push(row!.id);
+		}
+		await recordAudit(
+			{
+				actorUserId: actor.id,
+				action: lots.length === 1 ? 'shipment.lot_add' : 'shipment.lot_import',
+				entity: 'shipment',
+				entityId: shipmentId,
+				after: lots.length === 1 ? { ...lots[0] } : { lots: lots.length, lotIds: added },
+				ip
+			},
+			transaction
+		);
+		return added;
+	});
+	return { ok: true, value: { ids } };
+}
+
+/** Records one lot (the typed form); see addLots. */
 export async function addLot(
 	actor: SessionUser,
 	shipmentId: string,
 	input: LotInput,
 	ip: string | null
 ): Promise<ServiceResult<{ id: string }>> {
-	if (!canEditShipments(actor))
-		return fail(403, 'Only coordinators and administrators record lots.');
-	const shipment = await getShipment(actor, shipmentId);
-	if (!shipment) return fail(404, 'No shipment with this id is visible to you.');
-	if (shipment.version !== input.version)
-		return fail(409, 'Someone else changed this shipment. Reload and try again.');
-	const products = await productsBySku(shipment.lines.map((l) => l.sku));
-	const result = measure(measureInputFrom([...products.values()], shipment.lines, null));
-	if (!result.ok) return fail(400, 'Measure the lines first: some products have no packaging.');
-	const ranges = result.lines
-		.filter((line) => shipment.lines[line.lineIndex]?.productId === input.productId)
-		.map((line) => [line.firstCarton, line.lastCarton] as const);
-	if (ranges.length === 0)
-		return fail(400, 'Check the highlighted fields.', {
-			productId: 'This product is not on the shipment.'
-		});
-	const inside = ranges.some(([from, to]) => input.cartonFrom >= from && input.cartonTo <= to);
-	if (!inside) {
-		const text = ranges.map(([from, to]) => `${from}–${to}`).join(', ');
-		return fail(400, 'Check the highlighted fields.', {
-			cartonTo: `This product is in cartons ${text}.`
-		});
-	}
-	const id = await Shipment.sequelize!.transaction(async (transaction) => {
-		const [row] = await Shipment.sequelize!.query<{ id: string }>(
-			`INSERT INTO shipment_lots (shipment_id, product_id, carton_from, carton_to, lot_number, serial_from, serial_to, created_by)
-			 VALUES (:shipmentId, :productId, :cartonFrom, :cartonTo, :lotNumber, :serialFrom, :serialTo, :actor) RETURNING id`,
-			{
-				type: QueryTypes.SELECT,
-				transaction,
-				replacements: {
-					shipmentId,
-					productId: input.productId,
-					cartonFrom: input.cartonFrom,
-					cartonTo: input.cartonTo,
-					lotNumber: input.lotNumber,
-					serialFrom: input.serialFrom || null,
-					serialTo: input.serialTo || null,
-					actor: actor.id
-				}
-			}
-		);
-		await recordAudit(
-			{
-				actorUserId: actor.id,
-				action: 'shipment.lot_add',
-				entity: 'shipment',
-				entityId: shipmentId,
-				after: { ...input },
-				ip
-			},
-			transaction
-		);
-		return row!.id;
-	});
-	return { ok: true, value: { id } };
+	const { version, ...lot } = input;
+	const result = await addLots(actor, shipmentId, [lot], version, ip);
+	return result.ok ? { ok: true, value: { id: result.value.ids[0]! } } : result;
 }
 
 export async function removeLot(

@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
-import { addLot, listLots, removeLot } from '$lib/server/services/shipment-lots';
+import { addLot, addLots, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
 import { canEditShipments } from '$lib/server/services/shipment-scope';
@@ -18,6 +18,7 @@ import {
 } from '$lib/server/services/shipments';
 import {
 	containerSchema,
+	lotImportSchema,
 	lotSchema,
 	shipmentLinesSchema,
 	shipmentSchema,
@@ -63,7 +64,7 @@ export const load: PageServerLoad = async (event) => {
 		quantity: l.quantity,
 		unitPrice: l.unitPrice
 	}));
-	const [headerForm, linesForm, containerForm, lotForm, lots] = await Promise.all([
+	const [headerForm, linesForm, containerForm, lotForm, lotImportForm, lots] = await Promise.all([
 		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
 		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
 			errors: false,
@@ -74,6 +75,10 @@ export const load: PageServerLoad = async (event) => {
 			id: 'container'
 		}),
 		superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
+		superValidate({ lots: [], version: shipment.version }, zod4(lotImportSchema), {
+			errors: false,
+			id: 'lot-import'
+		}),
 		listLots(shipment.id)
 	]);
 	return {
@@ -87,6 +92,7 @@ export const load: PageServerLoad = async (event) => {
 		linesForm,
 		containerForm,
 		lotForm,
+		lotImportForm,
 		lots
 	};
 };
@@ -177,6 +183,27 @@ export const actions: Actions = {
 		const result = await addLot(user, event.params.shipmentId, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);
 		return message(form, { tone: 'ok', text: `Lot ${form.data.lotNumber} recorded.` });
+	},
+	importLots: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(lotImportSchema), { id: 'lot-import' });
+		if (!form.valid) {
+			return message(
+				form,
+				{ tone: 'error', text: 'Some rows are not valid: read the file again and check them.' },
+				{ status: 400 }
+			);
+		}
+		const result = await addLots(
+			user,
+			event.params.shipmentId,
+			form.data.lots,
+			form.data.version,
+			event.getClientAddress()
+		);
+		if (!result.ok) return refuse(form, result);
+		const n = result.value.ids.length;
+		return message(form, { tone: 'ok', text: `${n} lot${n === 1 ? '' : 's'} recorded.` });
 	},
 	removeLot: async (event) => {
 		const user = editor(event);
