@@ -60,6 +60,9 @@ test('the pages a coordinator works in', async ({ page }) => {
 		'/products/new',
 		'/places',
 		'/parties',
+		'/equipment',
+		'/equipment/pallet-types/new',
+		'/equipment/container-types/new',
 		'/trace?q=PB20-000100'
 	]) {
 		await page.goto(path);
@@ -72,4 +75,22 @@ test('the pages a coordinator works in', async ({ page }) => {
 	await page.goto('/products');
 	await page.getByRole('link', { name: 'SLV-PBL-20' }).click();
 	await expectAccessible(page, 'product detail');
+	for (const [list, link, label] of [
+		['/places', 'MYPKG', 'place detail'],
+		['/equipment', 'P1208', 'pallet type detail'],
+		['/equipment', 'C20GP', 'container type detail']
+	] as const) {
+		await page.goto(list);
+		await page.getByRole('link', { name: link, exact: true }).click();
+		await expect(page.getByRole('heading', { name: new RegExp(`^${link}`) })).toBeVisible();
+		await expectAccessible(page, label);
+	}
+	await page.goto('/parties');
+	await page.locator('table a').first().click();
+	await expect(page.getByRole('heading', { name: 'Edit the party' })).toBeVisible();
+	await expectAccessible(page, 'party detail');
+	await page.getByLabel('Name').fill('');
+	await page.getByRole('button', { name: 'Save party' }).click();
+	await expect(page.getByText('Enter the name.')).toBeVisible();
+	await expectAccessible(page, 'party detail with a field error');
 });
