@@ -60,9 +60,6 @@ test('the pages a coordinator works in', async ({ page }) => {
 		'/products/new',
 		'/places',
 		'/parties',
-		'/equipment',
-		'/equipment/pallet-types/new',
-		'/equipment/container-types/new',
 		'/trace?q=PB20-000100'
 	]) {
 		await page.goto(path);
@@ -75,6 +72,19 @@ test('the pages a coordinator works in', async ({ page }) => {
 	await page.goto('/products');
 	await page.getByRole('link', { name: 'SLV-PBL-20' }).click();
 	await expectAccessible(page, 'product detail');
+});
+
+test('the master-data pages a coordinator edits', async ({ page }) => {
+	test.setTimeout(120_000);
+	await signInPage(page, DEMO.coordinator);
+	for (const path of [
+		'/equipment',
+		'/equipment/pallet-types/new',
+		'/equipment/container-types/new'
+	]) {
+		await page.goto(path);
+		await expectAccessible(page, path);
+	}
 	for (const [list, link, label] of [
 		['/places', 'MYPKG', 'place detail'],
 		['/equipment', 'P1208', 'pallet type detail'],
