@@ -3,3 +3,8 @@ export interface FormNote {
 	tone: 'ok' | 'error';
 	text: string;
 }
+
+/** Countries as select choices: "Germany (DE)". */
+export function countryChoices(countries: readonly { code: string; name: string }[]) {
+	return countries.map((c) => ({ value: c.code, label: `${c.name} (${c.code})` }));
+}

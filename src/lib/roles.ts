@@ -42,6 +42,11 @@ export function isStaff(role: Role): boolean {
 	return (STAFF_ROLES as readonly Role[]).includes(role);
 }
 
+/** Who adds and changes master data: places, parties, products, pallet and container types. */
+export function canEditMasterData(role: Role): boolean {
+	return role === 'admin' || role === 'coordinator';
+}
+
 export interface NavItem {
 	href: string;
 	label: string;
@@ -53,18 +58,28 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 	const shipments = { href: '/shipments', label: 'Shipments' };
 	const products = { href: '/products', label: 'Products' };
 	const trace = { href: '/trace', label: 'Trace a serial' };
+	const equipment = { href: '/equipment', label: 'Pallets & containers' };
 	switch (role) {
 		case 'admin':
 			return [
 				overview,
 				shipments,
 				products,
+				equipment,
 				trace,
 				{ href: '/organizations', label: 'Organizations' },
 				{ href: '/admin/users', label: 'People & access' },
 				{ href: '/admin/audit', label: 'Audit trail' }
 			];
 		case 'coordinator':
+			return [
+				overview,
+				shipments,
+				products,
+				equipment,
+				trace,
+				{ href: '/organizations', label: 'Organizations' }
+			];
 		case 'finance':
 			return [
 				overview,

@@ -73,3 +73,34 @@ test('the pages a coordinator works in', async ({ page }) => {
 	await page.getByRole('link', { name: 'SLV-PBL-20' }).click();
 	await expectAccessible(page, 'product detail');
 });
+
+test('the master-data pages a coordinator edits', async ({ page }) => {
+	test.setTimeout(120_000);
+	await signInPage(page, DEMO.coordinator);
+	for (const path of [
+		'/equipment',
+		'/equipment/pallet-types/new',
+		'/equipment/container-types/new'
+	]) {
+		await page.goto(path);
+		await expectAccessible(page, path);
+	}
+	for (const [list, link, label] of [
+		['/places', 'MYPKG', 'place detail'],
+		['/equipment', 'P1208', 'pallet type detail'],
+		['/equipment', 'C20GP', 'container type detail']
+	] as const) {
+		await page.goto(list);
+		await page.getByRole('link', { name: link, exact: true }).click();
+		await expect(page.getByRole('heading', { name: new RegExp(`^${link}`) })).toBeVisible();
+		await expectAccessible(page, label);
+	}
+	await page.goto('/parties');
+	await page.locator('table a').first().click();
+	await expect(page.getByRole('heading', { name: 'Edit the party' })).toBeVisible();
+	await expectAccessible(page, 'party detail');
+	await page.getByLabel('Name').fill('');
+	await page.getByRole('button', { name: 'Save party' }).click();
+	await expect(page.getByText('Enter the name.')).toBeVisible();
+	await expectAccessible(page, 'party detail with a field error');
+});

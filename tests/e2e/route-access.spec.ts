@@ -29,11 +29,14 @@ const READ_PRODUCTS: Expect = { anonymous: 303, customer: 403, default: 200 };
 const OTHER_SHIPMENT_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
 const OTHER_SHIPMENT_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
 
+const LIFECYCLE = ['retire', 'reinstate', 'remove'] as const;
+
 interface Probe {
 	method: 'GET' | 'POST' | 'PATCH' | 'PUT';
 	/**
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
-	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's).
+	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :place,
+	 * :party, :pallet and :container (the first listed).
 	 */
 	path: string;
 	expect: Expect;
@@ -114,6 +117,76 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 	'/parties': {
 		page: [{ method: 'GET', path: '/parties', expect: READ_PRODUCTS }],
 		actions: [{ method: 'POST', path: '/parties', form: { name: '' }, expect: EDITOR_ACTION }]
+	},
+	'/places/[placeId=uuid]': {
+		page: [{ method: 'GET', path: '/places/:place', expect: READ_PRODUCTS }],
+		actions: [
+			{ method: 'POST', path: '/places/:place?/save', form: { code: '' }, expect: EDITOR_ACTION },
+			// A malformed version never reaches the service: editors 400, nothing changes.
+			...LIFECYCLE.map((a) => ({
+				method: 'POST' as const,
+				path: `/places/:place?/${a}`,
+				form: { version: 'x' },
+				expect: EDITOR_ACTION
+			}))
+		]
+	},
+	'/parties/[partyId=uuid]': {
+		page: [{ method: 'GET', path: '/parties/:party', expect: READ_PRODUCTS }],
+		actions: [
+			{ method: 'POST', path: '/parties/:party?/save', form: { name: '' }, expect: EDITOR_ACTION },
+			...LIFECYCLE.map((a) => ({
+				method: 'POST' as const,
+				path: `/parties/:party?/${a}`,
+				form: { version: 'x' },
+				expect: EDITOR_ACTION
+			}))
+		]
+	},
+	'/equipment': { page: [{ method: 'GET', path: '/equipment', expect: EDITOR_PAGE }] },
+	'/equipment/pallet-types/new': {
+		page: [{ method: 'GET', path: '/equipment/pallet-types/new', expect: EDITOR_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/equipment/pallet-types/new',
+				form: { code: '' },
+				expect: EDITOR_ACTION
+			}
+		]
+	},
+	'/equipment/pallet-types/[palletTypeId=uuid]': {
+		page: [{ method: 'GET', path: '/equipment/pallet-types/:pallet', expect: EDITOR_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/equipment/pallet-types/:pallet',
+				form: { code: '' },
+				expect: EDITOR_ACTION
+			}
+		]
+	},
+	'/equipment/container-types/new': {
+		page: [{ method: 'GET', path: '/equipment/container-types/new', expect: EDITOR_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/equipment/container-types/new',
+				form: { code: '' },
+				expect: EDITOR_ACTION
+			}
+		]
+	},
+	'/equipment/container-types/[containerTypeId=uuid]': {
+		page: [{ method: 'GET', path: '/equipment/container-types/:container', expect: EDITOR_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/equipment/container-types/:container',
+				form: { code: '' },
+				expect: EDITOR_ACTION
+			}
+		]
 	},
 	'/trace': { page: [{ method: 'GET', path: '/trace?q=PB20-000001', expect: STAFF_PAGE }] },
 	'/shipments/new': {
@@ -298,6 +371,10 @@ test.describe('access per role', () => {
 		other: '',
 		user: '',
 		product: '',
+		place: '',
+		party: '',
+		pallet: '',
+		container: '',
 		ship: '',
 		otherShip: ''
 	};
@@ -329,6 +406,12 @@ test.describe('access per role', () => {
 		ids.otherShip = rows.find((r) => r.customerName.startsWith('Wattlebird'))!.id;
 		const productsPage = await admin.get('/products');
 		ids.product = /\/products\/([0-9a-f-]{36})/.exec(await productsPage.text())![1]!;
+		const firstId = async (page: string, link: string) =>
+			new RegExp(`${link}/([0-9a-f-]{36})`).exec(await (await admin.get(page)).text())![1]!;
+		ids.place = await firstId('/places', '/places');
+		ids.party = await firstId('/parties', '/parties');
+		ids.pallet = await firstId('/equipment', '/equipment/pallet-types');
+		ids.container = await firstId('/equipment', '/equipment/container-types');
 	});
 
 	test.afterAll(async () => {
@@ -352,7 +435,11 @@ test.describe('access per role', () => {
 					.replace(':own', ids.own.get(who)!)
 					.replace(':other', ids.other)
 					.replace(':user', ids.user)
-					.replace(':product', ids.product);
+					.replace(':product', ids.product)
+					.replace(':place', ids.place)
+					.replace(':party', ids.party)
+					.replace(':pallet', ids.pallet)
+					.replace(':container', ids.container);
 				const response = await client.fetch(url, {
 					method: probe.method,
 					maxRedirects: 0,

@@ -6,12 +6,20 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Overview',
 		'Shipments',
 		'Products',
+		'Pallets & containers',
 		'Trace a serial',
 		'Organizations',
 		'People & access',
 		'Audit trail'
 	],
-	coordinator: ['Overview', 'Shipments', 'Products', 'Trace a serial', 'Organizations'],
+	coordinator: [
+		'Overview',
+		'Shipments',
+		'Products',
+		'Pallets & containers',
+		'Trace a serial',
+		'Organizations'
+	],
 	finance: ['Overview', 'Shipments', 'Products', 'Trace a serial', 'Organizations'],
 	broker: ['Overview', 'Shipments', 'Products', 'Our firm'],
 	customer: ['Overview', 'Shipments', 'Our company'],

@@ -9,6 +9,8 @@ const text = (label: string, max: number) =>
 		.min(1, `Enter the ${label}.`)
 		.max(max, `Keep the ${label} under ${max} characters.`);
 const optional = (max: number) => z.string().trim().max(max).default('');
+/** The row version the editor saw (optimistic locking); ignored when adding. */
+const version = z.number().int().min(0).default(0);
 
 /** A port, airport or inland point, with its UN/LOCODE-style code. */
 export const placeSchema = z
@@ -16,7 +18,8 @@ export const placeSchema = z
 		code: z.string().trim(),
 		name: text('name', 120),
 		kind: z.enum(PLACE_KINDS, { error: 'Choose the kind of place.' }),
-		countryCode
+		countryCode,
+		version
 	})
 	.superRefine((place, ctx) => {
 		const result = validateLocationCode(place.code);
@@ -67,6 +70,10 @@ export const partySchema = z.object({
 		.refine(
 			(value) => value.split('\n').every((l) => !l.trim() || TAX_ID_LINE.test(l.trim())),
 			'Write one identifier per line as “TYPE: value”, e.g. “EORI: DE123456789012345”.'
-		)
+		),
+	version
 });
 export type PartyInput = z.infer<typeof partySchema>;
+
+/** Retire, reinstate or remove a place or party: only the version the editor saw. */
+export const versionSchema = z.object({ version });

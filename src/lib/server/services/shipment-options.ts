@@ -1,8 +1,13 @@
+import { Op } from 'sequelize';
 import { ContainerTypeRow, Organization, PalletTypeRow, Party, Place } from '../db/models';
 import { listProducts } from './products';
 
-/** Choices for the shipment forms: organizations, parties, places, equipment, products. */
-export async function shipmentFormOptions() {
+/**
+ * Choices for the shipment forms: organizations, parties, places, equipment, products. Retired
+ * places and parties are left out, except those in `keep` (what the shipment already names).
+ */
+export async function shipmentFormOptions(keep: (string | null)[] = []) {
+	const current = { [Op.or]: [{ active: true }, { id: keep.filter((id) => id !== null) }] };
 	const [organizations, parties, places, palletTypes, containerTypes, products] = await Promise.all(
 		[
 			Organization.findAll({
@@ -12,11 +17,13 @@ export async function shipmentFormOptions() {
 			}),
 			Party.findAll({
 				attributes: ['id', 'name', 'city', 'countryCode'],
+				where: current,
 				order: [['name', 'ASC']],
 				raw: true
 			}),
 			Place.findAll({
 				attributes: ['id', 'code', 'name', 'kind'],
+				where: current,
 				order: [['code', 'ASC']],
 				raw: true
 			}),

@@ -54,10 +54,14 @@ async function nextReference(transaction: Transaction, exporterId: string, year:
 	return `SHP-${year}-${String(row!.last_value).padStart(5, '0')}`;
 }
 
-/** Checks that every id in the header points at a row of the right kind. */
+/**
+ * Checks that every id in the header points at a row of the right kind. A retired place or party
+ * is accepted only where the shipment already names it (`current`).
+ */
 async function checkReferences(
 	input: ShipmentInput,
-	transaction: Transaction
+	transaction: Transaction,
+	current?: Shipment
 ): Promise<Record<string, string>> {
 	const errors: Record<string, string> = {};
 	const customer = await Organization.findByPk(input.customerId, { transaction });
@@ -68,12 +72,18 @@ async function checkReferences(
 		if (!broker || broker.kind !== 'broker')
 			errors.brokerId = 'Choose one of the customs broker firms.';
 	}
+	const retiredAnew = (row: { id: string; active: boolean }, field: keyof Shipment) =>
+		!row.active && current?.[field] !== row.id;
 	for (const field of ['consigneeId', 'notifyPartyId'] as const) {
-		if (input[field] && !(await Party.findByPk(input[field], { transaction })))
-			errors[field] = 'No such party.';
+		if (!input[field]) continue;
+		const party = await Party.findByPk(input[field], { transaction });
+		if (!party) errors[field] = 'No such party.';
+		else if (retiredAnew(party, field)) errors[field] = `${party.name} is retired; choose another.`;
 	}
 	for (const field of ['originId', 'destinationId'] as const) {
-		if (!(await Place.findByPk(input[field], { transaction }))) errors[field] = 'No such place.';
+		const place = await Place.findByPk(input[field], { transaction });
+		if (!place) errors[field] = 'No such place.';
+		else if (retiredAnew(place, field)) errors[field] = `${place.code} is retired; choose another.`;
 	}
 	if (input.palletTypeId && !(await PalletTypeRow.findByPk(input.palletTypeId, { transaction }))) {
 		errors.palletTypeId = 'No such pallet type.';
@@ -191,7 +201,7 @@ export async function updateShipment(
 	return run(async (transaction) => {
 		const shipment = await lockShipment(actor, id, transaction);
 		requireEditable(shipment);
-		const errors = await checkReferences(input, transaction);
+		const errors = await checkReferences(input, transaction, shipment);
 		if (Object.keys(errors).length)
 			throw new Refused(refusal(400, 'Check the highlighted fields.', errors));
 		await bumpVersion(transaction, id, input.version);

@@ -1,6 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
+import { canEditMasterData } from '$lib/roles';
 import { requireRole } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
@@ -13,7 +14,7 @@ export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, 'admin', 'coordinator', 'finance', 'broker');
 	return {
 		parties: await listParties(),
-		canEdit: user.role === 'admin' || user.role === 'coordinator',
+		canEdit: canEditMasterData(user.role),
 		form: await superValidate(zod4(partySchema)),
 		countries: countryAndCurrencyOptions().countries
 	};

@@ -22,6 +22,9 @@ export class PalletTypeRow extends Model<
 	declare maxGrossKg: string;
 	declare maxLoadedHeightMm: number;
 	declare sourceNote: string;
+	declare version: CreationOptional<number>;
+	/** true: added in Landfall, not from data/*.json. */
+	declare custom: CreationOptional<boolean>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
@@ -44,6 +47,9 @@ export class ContainerTypeRow extends Model<
 	declare maxGrossKg: string;
 	declare maxPayloadKg: string;
 	declare sourceNote: string;
+	declare version: CreationOptional<number>;
+	/** true: added in Landfall, not from data/*.json. */
+	declare custom: CreationOptional<boolean>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
@@ -66,6 +72,8 @@ export function initEquipmentModels(sequelize: Sequelize): void {
 			maxGrossKg: kg(),
 			maxLoadedHeightMm: int(),
 			sourceNote: text(),
+			version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+			custom: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
 			createdAt: DataTypes.DATE,
 			updatedAt: DataTypes.DATE
 		},
@@ -87,6 +95,8 @@ export function initEquipmentModels(sequelize: Sequelize): void {
 			maxGrossKg: kg(),
 			maxPayloadKg: kg(),
 			sourceNote: text(),
+			version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+			custom: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
 			createdAt: DataTypes.DATE,
 			updatedAt: DataTypes.DATE
 		},

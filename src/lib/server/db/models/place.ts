@@ -14,6 +14,9 @@ export class Place extends Model<InferAttributes<Place>, InferCreationAttributes
 	declare name: string;
 	declare kind: 'seaport' | 'airport' | 'inland' | 'rail_terminal' | 'road_terminal';
 	declare countryCode: string;
+	declare version: CreationOptional<number>;
+	/** false: retired, kept for the shipments that name it, not offered for new ones. */
+	declare active: CreationOptional<boolean>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
@@ -37,11 +40,17 @@ export class Party extends Model<InferAttributes<Party>, InferCreationAttributes
 	declare email: string | null;
 	declare phone: string | null;
 	declare taxIds: CreationOptional<PartyTaxId[]>;
+	declare version: CreationOptional<number>;
+	declare active: CreationOptional<boolean>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
 
 const id = () => ({ type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 });
+const versionAndActive = () => ({
+	version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+	active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true }
+});
 
 export function initPlaceModels(sequelize: Sequelize): void {
 	Place.init(
@@ -51,6 +60,7 @@ export function initPlaceModels(sequelize: Sequelize): void {
 			name: { type: DataTypes.TEXT, allowNull: false },
 			kind: { type: DataTypes.TEXT, allowNull: false },
 			countryCode: { type: DataTypes.CHAR(2), allowNull: false },
+			...versionAndActive(),
 			createdAt: DataTypes.DATE,
 			updatedAt: DataTypes.DATE
 		},
@@ -71,6 +81,7 @@ export function initPlaceModels(sequelize: Sequelize): void {
 			email: DataTypes.TEXT,
 			phone: DataTypes.TEXT,
 			taxIds: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+			...versionAndActive(),
 			createdAt: DataTypes.DATE,
 			updatedAt: DataTypes.DATE
 		},

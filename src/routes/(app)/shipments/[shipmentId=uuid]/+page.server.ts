@@ -36,7 +36,13 @@ export const load: PageServerLoad = async (event) => {
 	const { shipment, result } = measured;
 	const canEdit = canEditShipments(user);
 	const editable = canEdit && EDITABLE_STATUSES.includes(shipment.status);
-	const options = canEdit ? await shipmentFormOptions() : null;
+	const named = [
+		shipment.originId,
+		shipment.destinationId,
+		shipment.consigneeId,
+		shipment.notifyPartyId
+	];
+	const options = canEdit ? await shipmentFormOptions(named) : null;
 	const header = {
 		customerId: shipment.customerId,
 		consigneeId: shipment.consigneeId ?? '',
