@@ -3,8 +3,12 @@
  * approach to the container loading problem", Computers & Operations Research 43 (BSG): each
  * child of a beam node is scored by the volume of a greedy completion from it; the best `width`
  * children form the next level; the whole search is repeated with the width doubled until the
- * time budget is spent (an anytime scheme). The greedy puts the largest fitting block into the
- * chosen space, as in Fanslau & Bortfeldt (2010). Our own implementation.
+ * time budget is spent (an anytime scheme). The greedy and the beam's children take the blocks
+ * with the best fitness (see fitness()) in the chosen space. Our own implementation.
+ *
+ * Speed: block sizes sit in typed arrays for the first scan, and because fitness never exceeds a
+ * block's volume and the blocks are sorted by volume, a scan stops once no later block can enter
+ * the top k. Space objects are immutable, so a state copies only arrays of references.
  */
 import type { Block } from './blocks';
 import type { CoreProblem } from './core-types';

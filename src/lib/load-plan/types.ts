@@ -56,7 +56,11 @@ export interface LoadPlanProgress {
 }
 
 export interface LoadPlanOptions {
-	/** Share of each item's base that must rest on the floor or on items below: 0 < s ≤ 1. */
+	/**
+	 * Share of each item's base that must rest on the floor or on items below: 0 < s ≤ 1, default 1.
+	 * The search always builds fully supported stows (which meet any share); validatePlan checks
+	 * the share given here.
+	 */
 	supportShare?: number;
 	/** 'fewest' containers (ties → smaller total volume) or 'cheapest' with `rates`. */
 	objective?: 'fewest' | 'cheapest';
