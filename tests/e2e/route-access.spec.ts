@@ -399,7 +399,10 @@ test.describe('access per role', () => {
 		ids.other = users.find((u) => u.email === DEMO.otherCustomer)!.organizationId;
 		ids.user = users.find((u) => u.email === DEMO.coordinator)!.id;
 		expect(organizations.length).toBeGreaterThan(3);
-		const { rows } = (await (await admin.get('/api/v1/shipments?pageSize=200')).json()) as {
+		// Oldest first: the seeded ones (Hallvik's has broker Kaaiman), not drafts that other
+		// specs running alongside create for Hallvik.
+		const list = await admin.get('/api/v1/shipments?pageSize=200&sort=created&dir=asc');
+		const { rows } = (await list.json()) as {
 			rows: { id: string; customerName: string }[];
 		};
 		ids.ship = rows.find((r) => r.customerName.startsWith('Hallvik'))!.id;
