@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { MIN_FILL, generateBlocks } from './blocks';
 import { NO_LOAD, type CoreBoxType } from './core-types';
 import { allowedExtents } from './orientations';
+import { meter } from './work-budget';
 
 const container = { L: 600, W: 400, H: 300, payload: Infinity };
 const type = (l: number, w: number, h: number, count: number, cap = Infinity): CoreBoxType => ({
@@ -11,7 +12,7 @@ const type = (l: number, w: number, h: number, count: number, cap = Infinity): C
 	cap,
 	volume: l * w * h
 });
-const limits = { maxBlocks: 5000, deadline: Infinity };
+const limits = { maxBlocks: 5000, meter: meter(Infinity, Infinity), maxWork: Infinity };
 
 describe('generateBlocks', () => {
 	it('never uses more boxes of a type than there are', () => {

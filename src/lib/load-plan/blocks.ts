@@ -13,6 +13,7 @@
  *   it (a conservative reading: a load anywhere on the block is assumed to bear on each box).
  */
 import { NO_LOAD, type CoreBoxType, type CoreContainer } from './core-types';
+import type { WorkMeter } from './work-budget';
 
 export const MIN_FILL = 0.98;
 
@@ -45,8 +46,10 @@ export interface Block {
 
 export interface BlockLimits {
 	maxBlocks: number;
-	/** Stop generating general blocks at this performance.now() time. */
-	deadline: number;
+	/** Each pair tried costs one unit; general blocks stop once `meter.used` reaches `maxWork`
+	 * (or at the meter's safety deadline). */
+	meter: WorkMeter;
+	maxWork: number;
 }
 
 function key(b: Block): string {
@@ -209,6 +212,10 @@ function lowerBound(keys: Float64Array, v: number): number {
 	return lo;
 }
 
+function spent(limits: BlockLimits): boolean {
+	return limits.meter.used >= limits.maxWork || performance.now() > limits.meter.deadline;
+}
+
 /** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
 function compareBlocks(p: Block, q: Block, keys: Map<Block, string>): number {
 	if (p.vol !== q.vol) return q.vol - p.vol;
@@ -220,7 +227,7 @@ function compareBlocks(p: Block, q: Block, keys: Map<Block, string>): number {
 
 /**
  * Simple blocks, then general blocks in rounds (each round pairs the blocks of the last round with
- * all so far) until `maxBlocks`, no new block, or the deadline. Sorted by compareBlocks.
+ * all so far) until `maxBlocks`, no new block, or the work cap. Sorted by compareBlocks.
  */
 export function generateBlocks(
 	types: CoreBoxType[],
@@ -253,7 +260,9 @@ export function generateBlocks(
 		// stacked only with nearly the same footprint (others rarely reach MIN_FILL).
 		const byHeight = sortedBy(all, to, (b) => b.dz);
 		const byArea = sortedBy(all, to, (b) => b.dx * b.dy);
+		const m = limits.meter;
 		const tryPair = (ob: Block, nb: Block, kind: 1 | 2 | 3): boolean => {
+			m.used += 2;
 			const g1 = combine(ob, nb, kind, c, types);
 			if (g1 !== null && add(g1) && all.length >= limits.maxBlocks) return true;
 			if (ob === nb) return false;
@@ -273,9 +282,9 @@ export function generateBlocks(
 					for (const kind of kinds) if (tryPair(all[i]!, nb, kind)) break outer;
 				}
 			}
-			if ((j & 15) === 0 && performance.now() > limits.deadline) break;
+			if (spent(limits)) break;
 		}
-		if (performance.now() > limits.deadline) break;
+		if (spent(limits)) break;
 		from = to;
 	}
 	return all.sort((p, q) => compareBlocks(p, q, keys));

@@ -7,17 +7,21 @@
  * 2. 'fewest': fewest containers, then smaller total internal volume;
  *    'cheapest': lowest total rate, then fewest containers;
  * 3. the earlier candidate type.
- * The time budget is shared evenly between the sequences, and within one between the containers
- * it is still expected to need.
+ * The work budget is shared evenly between the sequences, and within one between the containers
+ * it is still expected to need; work one of them leaves unspent passes on to the next.
  */
 import Decimal from 'decimal.js';
 import { canTake, fillContainer, type FillResult } from './fill-container';
 import type { PreparedContainer, PreparedItem } from './prepare';
+import { worse, type StopReason } from './work-budget';
 
 export interface MixOptions {
 	/** Rates per container index for 'cheapest'; null for 'fewest'. */
 	rates: Decimal[] | null;
 	maxContainers: number;
+	/** Work units for the whole choice (see work-budget.ts). */
+	work: number;
+	/** Safety stop, performance.now() time. */
 	deadline: number;
 	seed: number;
 	/** Called after each sequence with the best one so far. */
@@ -29,7 +33,9 @@ export interface Sequence {
 	/** Pieces left per item index. */
 	remaining: number[];
 	placed: number;
-	stoppedBy: 'complete' | 'time';
+	stoppedBy: StopReason;
+	/** Work units spent. */
+	work: number;
 }
 
 function volumeLeft(items: readonly PreparedItem[], remaining: readonly number[]): number {
@@ -65,11 +71,18 @@ function sequence(
 	containers: readonly PreparedContainer[],
 	start: readonly number[],
 	o: MixOptions,
-	deadline: number
+	budget: number
 ): Sequence {
 	const remaining = start.slice();
 	const fills: Sequence['fills'] = [];
-	let stoppedBy: Sequence['stoppedBy'] = 'complete';
+	let stoppedBy: StopReason = 'complete';
+	let used = 0;
+	const run = (type: number, slice: number): FillResult => {
+		const f = fillContainer(items, remaining, containers[type]!, slice, o.deadline, o.seed);
+		used += f.work;
+		stoppedBy = worse(stoppedBy, f.stoppedBy);
+		return f;
+	};
 	const c = containers[primary]!;
 	const alts = alternatives(primary, containers, o);
 	while (remaining.some((r) => r > 0) && fills.length < o.maxContainers) {
@@ -79,21 +92,13 @@ function sequence(
 			Math.ceil(volumeLeft(items, remaining) / (c.volume * 0.85))
 		);
 		const parts = Math.max(1, expected) + (alts.length > 0 ? 1 : 0);
-		const slice = Math.max(0, deadline - performance.now()) / parts;
-		let fill = fillContainer(items, remaining, c, performance.now() + slice, o.seed);
+		const slice = Math.max(0, budget - used) / parts;
+		let fill = run(primary, slice);
 		let type = primary;
-		if (fill.stoppedBy === 'time') stoppedBy = 'time';
 		if (fill.boxes.length === 0) break;
 		if (takesAll(fill, remaining)) {
 			for (const u of alts) {
-				const alt = fillContainer(
-					items,
-					remaining,
-					containers[u]!,
-					performance.now() + slice,
-					o.seed
-				);
-				if (alt.stoppedBy === 'time') stoppedBy = 'time';
+				const alt = run(u, slice);
 				if (takesAll(alt, remaining)) {
 					fill = alt;
 					type = u;
@@ -105,7 +110,7 @@ function sequence(
 		fills.push({ type, fill });
 	}
 	const placed = fills.reduce((n, f) => n + f.fill.boxes.length, 0);
-	return { fills, remaining, placed, stoppedBy };
+	return { fills, remaining, placed, stoppedBy, work: used };
 }
 
 function better(
@@ -133,13 +138,15 @@ export function chooseMix(
 	o: MixOptions
 ): Sequence {
 	let best: Sequence | null = null;
-	let stoppedBy: Sequence['stoppedBy'] = 'complete';
+	let stoppedBy: StopReason = 'complete';
+	let used = 0;
 	for (let t = 0; t < containers.length; t++) {
-		const share = Math.max(0, o.deadline - performance.now()) / (containers.length - t);
-		const s = sequence(t, items, containers, remaining, o, performance.now() + share);
-		if (s.stoppedBy === 'time') stoppedBy = 'time';
+		const share = Math.max(0, o.work - used) / (containers.length - t);
+		const s = sequence(t, items, containers, remaining, o, share);
+		used += s.work;
+		stoppedBy = worse(stoppedBy, s.stoppedBy);
 		if (best === null || better(s, best, containers, o.rates)) best = s;
 		o.onSequence?.(best);
 	}
-	return { ...best!, stoppedBy };
+	return { ...best!, stoppedBy, work: used };
 }

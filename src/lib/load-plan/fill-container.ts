@@ -8,6 +8,7 @@ import { expandPlaced } from './expand';
 import { coreBoxType, type PreparedContainer, type PreparedItem } from './prepare';
 import { beamSearch, blockTable } from './search';
 import type { OrientedExtent } from './orientations';
+import { meter, type StopReason } from './work-budget';
 
 /**
  * Most blocks generated per container. Fanslau & Bortfeldt (2010) use 10,000; with a budget of
@@ -16,6 +17,8 @@ import type { OrientedExtent } from './orientations';
 export const MAX_BLOCKS = 2_000;
 /** Widest beam of the schedule; a search that gets there is complete. */
 export const MAX_WIDTH = 1024;
+/** Largest share of a container's work that block generation may take. */
+export const BLOCK_WORK_SHARE = 0.4;
 /** Children tried per beam node. */
 export const CHILDREN = 8;
 
@@ -33,7 +36,9 @@ export interface FillResult {
 	/** Pieces placed per item index. */
 	placed: number[];
 	volume: number;
-	stoppedBy: 'complete' | 'time';
+	stoppedBy: StopReason;
+	/** Work units spent (see work-budget.ts). */
+	work: number;
 }
 
 /** Whether `item` could go into an empty container `c` on its own. */
@@ -45,6 +50,7 @@ export function fillContainer(
 	items: readonly PreparedItem[],
 	remaining: readonly number[],
 	c: PreparedContainer,
+	work: number,
 	deadline: number,
 	seed: number
 ): FillResult {
@@ -57,19 +63,20 @@ export function fillContainer(
 		}
 	}
 	const placed = items.map(() => 0);
-	if (types.length === 0) return { boxes: [], placed, volume: 0, stoppedBy: 'complete' };
+	if (types.length === 0) return { boxes: [], placed, volume: 0, stoppedBy: 'complete', work: 0 };
 	const problem: CoreProblem = {
 		container: { L: c.L, W: c.W, H: c.H, payload: c.payload },
 		types
 	};
-	const start = performance.now();
-	// Block generation is bounded by count; the deadline is only a guard for huge inputs.
+	const m = meter(work, deadline);
+	// Block generation may use at most BLOCK_WORK_SHARE of the work (it rarely needs it).
 	const blocks = generateBlocks(types, problem.container, {
 		maxBlocks: MAX_BLOCKS,
-		deadline: start + (deadline - start) * 0.4
+		meter: m,
+		maxWork: work * BLOCK_WORK_SHARE
 	});
 	const result = beamSearch(problem, blockTable(blocks), {
-		deadline,
+		meter: m,
 		maxWidth: MAX_WIDTH,
 		children: CHILDREN,
 		seed
@@ -79,5 +86,5 @@ export function fillContainer(
 		placed[item]!++;
 		return { item, extent: b.extent, x: b.x, y: b.y, z: b.z };
 	});
-	return { boxes, placed, volume: result.state.vol, stoppedBy: result.stoppedBy };
+	return { boxes, placed, volume: result.state.vol, stoppedBy: result.stoppedBy, work: m.used };
 }

@@ -6,6 +6,7 @@
  */
 export { planLoad, DEFAULT_TIME_BUDGET_MS, DEFAULT_MAX_CONTAINERS } from './plan-load';
 export { validatePlan, type Violation } from './validate-plan';
+export { WORK_PER_MS } from './work-budget';
 export { validateLoadInput, MAX_PIECES } from './validate-input';
 export { palletItem, type LoadedPallet } from './pallet-item';
 export {

@@ -4,8 +4,9 @@
  * single-container search; the result is dressed with utilisation, payload, the centre of gravity
  * and its warnings.
  *
- * Pure module: no framework imports. Deterministic: the same input and seed give the same plan
- * whenever the search ends before its time budget (`search.stoppedBy === 'complete'`).
+ * Pure module: no framework imports. Deterministic: the search is bounded by a count of work,
+ * not by the clock (work-budget.ts), so the same input and seed give the same plan on any
+ * machine, unless the wall-clock safety stop was hit (`search.stoppedBy === 'time'`).
  */
 import Decimal from 'decimal.js';
 import { centreOfGravity, centreOfGravityWarnings } from './centre-of-gravity';
@@ -27,6 +28,7 @@ import type {
 } from './types';
 import { unplaceableReason } from './unplaceable';
 import { validateLoadInput } from './validate-input';
+import { SAFETY_FACTOR, SAFETY_SLACK_MS, WORK_PER_MS } from './work-budget';
 
 export const DEFAULT_TIME_BUDGET_MS = 3_000;
 export const DEFAULT_MAX_CONTAINERS = 100;
@@ -88,7 +90,8 @@ export function planLoad(input: LoadPlanInput): LoadPlanResult {
 	const start = performance.now();
 	const options = input.options ?? {};
 	const budget = options.timeBudgetMs ?? DEFAULT_TIME_BUDGET_MS;
-	const deadline = start + budget;
+	const work = options.workBudget ?? budget * WORK_PER_MS;
+	const deadline = start + SAFETY_FACTOR * budget + SAFETY_SLACK_MS;
 	const maxContainers = options.maxContainers ?? DEFAULT_MAX_CONTAINERS;
 	const seed = options.seed ?? 1;
 	const items = input.items.map(prepareItem);
@@ -111,6 +114,7 @@ export function planLoad(input: LoadPlanInput): LoadPlanResult {
 	const mix = chooseMix(items, containers, remaining, {
 		rates,
 		maxContainers,
+		work,
 		deadline,
 		seed,
 		onSequence: (best) =>
@@ -161,6 +165,8 @@ export function planLoad(input: LoadPlanInput): LoadPlanResult {
 			elapsedMs: Math.round(performance.now() - start),
 			stoppedBy,
 			timeBudgetMs: budget,
+			workBudget: work,
+			workUsed: Math.round(mix.work),
 			seed
 		}
 	};

@@ -32,6 +32,8 @@ export interface State {
 	min: MinExtents;
 	/** Per axis, the longest run of box extents left that fits a gap (see reach()). */
 	reach: Reach;
+	/** Types left when `reach` was last computed (it is refreshed lazily, see place()). */
+	reachTypes: number;
 }
 
 /** fill[g]: the largest sum of extents (of boxes left, any number of each) that is ≤ g mm. */
@@ -73,6 +75,32 @@ export function reach(problem: CoreProblem, avail: Int32Array): Reach {
 	};
 }
 
+/** Refresh the gap tables once the types left fall to this share of those they were built for. */
+const REACH_REFRESH = 0.9;
+const REACH_CACHE_MAX = 4_096;
+const reachCache = new WeakMap<CoreProblem, Map<string, Reach>>();
+
+function typesLeft(avail: Int32Array): number {
+	let n = 0;
+	for (let i = 0; i < avail.length; i++) if (avail[i]! > 0) n++;
+	return n;
+}
+
+/** reach() memoised per problem: it depends only on which types are left, shared by many states. */
+function leftReach(problem: CoreProblem, avail: Int32Array): Reach {
+	let cache = reachCache.get(problem);
+	if (cache === undefined) reachCache.set(problem, (cache = new Map()));
+	let key = '';
+	for (let i = 0; i < avail.length; i++) if (avail[i]! <= 0) key += `${i},`;
+	let hit = cache.get(key);
+	if (hit === undefined) {
+		if (cache.size >= REACH_CACHE_MAX) cache.clear();
+		hit = reach(problem, avail);
+		cache.set(key, hit);
+	}
+	return hit;
+}
+
 export function rootState(problem: CoreProblem): State {
 	const { L, W, H } = problem.container;
 	const avail = Int32Array.from(problem.types.map((t) => t.count));
@@ -84,7 +112,8 @@ export function rootState(problem: CoreProblem): State {
 		vol: 0,
 		weight: 0,
 		min: minExtents(problem, avail),
-		reach: reach(problem, avail)
+		reach: reach(problem, avail),
+		reachTypes: typesLeft(avail)
 	};
 }
 
@@ -97,7 +126,8 @@ export function cloneState(s: State): State {
 		vol: s.vol,
 		weight: s.weight,
 		min: s.min,
-		reach: s.reach
+		reach: s.reach,
+		reachTypes: s.reachTypes
 	};
 }
 
@@ -185,7 +215,14 @@ export function place(problem: CoreProblem, state: State, si: number, b: Block):
 			: { x1: x, y1: y, z1: z + b.dz, x2: x + b.ax, y2: y + b.ay, z2: s.z2, p: index };
 	if (emptied) {
 		state.min = minExtents(problem, state.avail);
-		state.reach = reach(problem, state.avail);
+		// With many types the gap tables would be rebuilt at almost every block; a table that
+		// still counts a few used-up types is only slightly optimistic, so it is refreshed once a
+		// tenth of its types are gone.
+		const left = typesLeft(state.avail);
+		if (left <= state.reachTypes * REACH_REFRESH) {
+			state.reach = leftReach(problem, state.avail);
+			state.reachTypes = left;
+		}
 	}
 	state.spaces = placeInSpaces(state.spaces, x, y, z, x + b.dx, y + b.dy, z + b.dz, top, state.min);
 }

@@ -3,7 +3,7 @@
  * approach to the container loading problem", Computers & Operations Research 43 (BSG): each
  * child of a beam node is scored by the volume of a greedy completion from it; the best `width`
  * children form the next level; the whole search is repeated with the width doubled until the
- * time budget is spent (an anytime scheme). The greedy and the beam's children take the blocks
+ * work budget is spent (an anytime scheme; see work-budget.ts). The greedy and the beam's children take the blocks
  * with the best fitness (see fitness()) in the chosen space. Our own implementation.
  *
  * Speed: block sizes sit in typed arrays for the first scan, and because fitness never exceeds a
@@ -21,10 +21,11 @@ import {
 	selectSpace,
 	type State
 } from './search-state';
+import { exhausted, type WorkMeter } from './work-budget';
 
 export interface SearchLimits {
-	/** performance.now() time after which the best stow so far is returned. */
-	deadline: number;
+	/** Work (and safety time) after which the best stow so far is returned. */
+	meter: WorkMeter;
 	/** Widths 1, 2, 4… up to this; the schedule then counts as complete. */
 	maxWidth: number;
 	/** Children per beam node. */
@@ -43,7 +44,7 @@ function tieKey(n: number, seed: number): number {
 
 export interface SearchResult {
 	state: State;
-	stoppedBy: 'complete' | 'time';
+	stoppedBy: 'complete' | 'work' | 'time';
 	/** Greedy completions run (a measure of effort). */
 	greedyRuns: number;
 }
@@ -93,7 +94,8 @@ function fittingBlocks(
 	state: State,
 	si: number,
 	blocks: BlockTable,
-	k: number
+	k: number,
+	m: WorkMeter
 ): Block[] {
 	const s = state.spaces[si]!;
 	const sx = s.x2 - s.x1;
@@ -104,7 +106,8 @@ function fittingBlocks(
 	const payload = problem.container.payload;
 	const top: Block[] = [];
 	const score: number[] = [];
-	for (let i = 0; i < n; i++) {
+	let i = 0;
+	for (; i < n; i++) {
 		// Fitness never exceeds volume and the list is by volume: nothing later can enter the top.
 		if (top.length === k && vol[i]! <= score[k - 1]!) break;
 		if (dx[i]! > sx || dy[i]! > sy || dz[i]! > sz) continue;
@@ -121,19 +124,26 @@ function fittingBlocks(
 		top[j] = b;
 		score[j] = f;
 	}
+	m.used += i + 1;
 	return top;
 }
 
 /** Fills `state` greedily to the end (mutates it). */
-function greedy(problem: CoreProblem, state: State, blocks: BlockTable): State {
+function greedy(problem: CoreProblem, state: State, blocks: BlockTable, m: WorkMeter): State {
 	const W = problem.container.W;
 	for (;;) {
 		const si = selectSpace(state, W);
 		if (si < 0) return state;
-		const found = fittingBlocks(problem, state, si, blocks, 1);
+		const found = fittingBlocks(problem, state, si, blocks, 1, m);
 		if (found.length === 0) dropSpace(state, si);
-		else place(problem, state, si, found[0]!);
+		else placeCounted(problem, state, si, found[0]!, m);
 	}
+}
+
+/** place(), charging the space update to the meter. */
+function placeCounted(problem: CoreProblem, state: State, si: number, b: Block, m: WorkMeter) {
+	m.used += state.spaces.length;
+	place(problem, state, si, b);
 }
 
 /** The next space that has a fitting block, dropping those without (mutates `state`). */
@@ -141,12 +151,13 @@ function expansions(
 	problem: CoreProblem,
 	state: State,
 	blocks: BlockTable,
-	k: number
+	k: number,
+	m: WorkMeter
 ): { si: number; list: Block[] } | null {
 	for (;;) {
 		const si = selectSpace(state, problem.container.W);
 		if (si < 0) return null;
-		const list = fittingBlocks(problem, state, si, blocks, k);
+		const list = fittingBlocks(problem, state, si, blocks, k, m);
 		if (list.length > 0) return { si, list };
 		dropSpace(state, si);
 	}
@@ -161,7 +172,8 @@ export function beamSearch(
 	const c = problem.container;
 	const total = problem.types.reduce((sum, t) => sum + t.volume * t.count, 0);
 	const bound = Math.min(total, c.L * c.W * c.H);
-	let best = greedy(problem, cloneState(root), blocks);
+	const m = limits.meter;
+	let best = greedy(problem, cloneState(root), blocks, m);
 	let runs = 1;
 	for (let width = 2; width <= limits.maxWidth; width *= 2) {
 		if (best.vol >= bound) break;
@@ -170,18 +182,17 @@ export function beamSearch(
 			const next: { state: State; value: number; order: number }[] = [];
 			for (const node of beam) {
 				const work = cloneState(node);
-				const exp = expansions(problem, work, blocks, limits.children);
+				const exp = expansions(problem, work, blocks, limits.children, m);
 				if (exp === null) continue;
 				for (const b of exp.list) {
 					const child = cloneState(work);
-					place(problem, child, exp.si, b);
-					const done = greedy(problem, cloneState(child), blocks);
+					placeCounted(problem, child, exp.si, b, m);
+					const done = greedy(problem, cloneState(child), blocks, m);
 					runs++;
 					if (done.vol > best.vol) best = done;
 					next.push({ state: child, value: done.vol, order: tieKey(next.length, limits.seed) });
-					if (performance.now() > limits.deadline) {
-						return { state: best, stoppedBy: 'time', greedyRuns: runs };
-					}
+					const stop = exhausted(m);
+					if (stop !== null) return { state: best, stoppedBy: stop, greedyRuns: runs };
 				}
 			}
 			next.sort((p, q) => q.value - p.value || p.order - q.order);

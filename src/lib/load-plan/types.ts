@@ -66,8 +66,15 @@ export interface LoadPlanOptions {
 	objective?: 'fewest' | 'cheapest';
 	/** Cost of one container per type id (decimal string, one currency), for 'cheapest'. */
 	rates?: Record<string, string>;
-	/** Wall-clock bound of the whole search, ms. Default 3000. */
+	/**
+	 * Budget of the whole search, ms on the benchmark machine: it is turned into a fixed count of
+	 * work (× WORK_PER_MS, see work-budget.ts), so the plan does not depend on the machine's speed
+	 * or load. Default 3000. The wall clock stops the search only as a safety net at 5 × this
+	 * budget + 2 s (`search.stoppedBy` is then 'time').
+	 */
 	timeBudgetMs?: number;
+	/** Work budget in units (overrides the one derived from timeBudgetMs). */
+	workBudget?: number;
 	/** Tie-break seed; the same input and seed give the same plan. Default 1. */
 	seed?: number;
 	/** At most this many containers are opened. Default 100. */
@@ -144,9 +151,16 @@ export interface LoadPlan {
 	unplaced: UnplacedItems[];
 	search: {
 		elapsedMs: number;
-		/** 'time' when the budget cut the search short (the plan is then the best so far). */
-		stoppedBy: 'complete' | 'time';
+		/**
+		 * 'complete': the search schedule ran to its end; 'work': the work budget cut it short
+		 * (the plan is the best so far, and the same on any machine); 'time': the wall-clock
+		 * safety stop cut it short (best so far; this plan may depend on the machine).
+		 */
+		stoppedBy: 'complete' | 'work' | 'time';
 		timeBudgetMs: number;
+		/** Work units allowed and spent (see work-budget.ts). */
+		workBudget?: number;
+		workUsed?: number;
 		seed: number;
 	};
 }

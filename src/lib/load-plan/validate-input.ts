@@ -10,11 +10,14 @@ import {
 	isPositiveInt,
 	type Problem
 } from '../packing/problem';
+import { WORK_PER_MS } from './work-budget';
 
 /** Most pieces one plan takes (the search is sized for shipments, not warehouses). */
 export const MAX_PIECES = 20_000;
 export const MAX_TIME_BUDGET_MS = 600_000;
 export const MAX_CONTAINERS = 1_000;
+/** Largest work budget: MAX_TIME_BUDGET_MS worth of work (see work-budget.ts). */
+export const MAX_WORK_BUDGET = MAX_TIME_BUDGET_MS * WORK_PER_MS;
 
 const ITEM_MM = ['lengthMm', 'widthMm', 'heightMm'] as const;
 const CONTAINER_MM = ['lengthMm', 'widthMm', 'heightMm', 'doorWidthMm', 'doorHeightMm'] as const;
@@ -142,6 +145,12 @@ function checkOptions(v: unknown, containerIds: string[], problems: Problem[]): 
 		problems.push({
 			path: 'options.timeBudgetMs',
 			message: `Enter a whole number of milliseconds from 1 to ${MAX_TIME_BUDGET_MS}.`
+		});
+	}
+	if (v.workBudget !== undefined && !isPositiveInt(v.workBudget, MAX_WORK_BUDGET)) {
+		problems.push({
+			path: 'options.workBudget',
+			message: `Enter a whole number of work units from 1 to ${MAX_WORK_BUDGET}.`
 		});
 	}
 	if (v.seed !== undefined && !(typeof v.seed === 'number' && Number.isSafeInteger(v.seed))) {
