@@ -26,6 +26,7 @@ import type {
 	Placement,
 	UnplacedItems
 } from './types';
+import { frontGapWarning, stowShift, type Extent1 } from './stow-shift';
 import { unplaceableReason } from './unplaceable';
 import { validateLoadInput } from './validate-input';
 import { SAFETY_FACTOR, SAFETY_SLACK_MS, WORK_PER_MS } from './work-budget';
@@ -38,13 +39,27 @@ function share(part: Decimal, whole: Decimal): string {
 	return whole.isZero() ? '0.0000' : part.dividedBy(whole).toFixed(4, Decimal.ROUND_HALF_UP);
 }
 
+function cargoCentre(c: PreparedContainer, items: readonly PreparedItem[], ps: Placement[]) {
+	return centreOfGravity(
+		ps.map((p, i) => ({
+			weightKg: items[i]!.source.weightKg,
+			cx: p.x + p.lengthMm / 2,
+			cy: p.y + p.widthMm / 2,
+			cz: p.z + p.heightMm / 2
+		})),
+		c.L,
+		c.W
+	);
+}
+
 function containerLoad(
 	index: number,
 	c: PreparedContainer,
 	items: readonly PreparedItem[],
-	fill: FillResult
+	fill: FillResult,
+	balance: boolean
 ): ContainerLoad {
-	const placements: Placement[] = fill.boxes.map((b) => ({
+	let placements: Placement[] = fill.boxes.map((b) => ({
 		itemTypeId: items[b.item]!.source.id,
 		x: b.x,
 		y: b.y,
@@ -60,16 +75,23 @@ function containerLoad(
 		volume = volume.plus(new Decimal(b.extent.dx).times(b.extent.dy).times(b.extent.dz));
 		kg = kg.plus(items[b.item]!.source.weightKg);
 	}
-	const cog = centreOfGravity(
-		fill.boxes.map((b) => ({
-			weightKg: items[b.item]!.source.weightKg,
-			cx: b.x + b.extent.dx / 2,
-			cy: b.y + b.extent.dy / 2,
-			cz: b.z + b.extent.dz / 2
-		})),
-		c.L,
-		c.W
-	);
+	const pieceItems = fill.boxes.map((b) => items[b.item]!);
+	let cog = cargoCentre(c, pieceItems, placements);
+	const shift = balance
+		? stowShift(
+				cog,
+				c.L,
+				c.W,
+				span(placements.map((p) => [p.x, p.x + p.lengthMm])),
+				span(placements.map((p) => [p.y, p.y + p.widthMm]))
+			)
+		: { xMm: 0, yMm: 0 };
+	if (shift.xMm !== 0 || shift.yMm !== 0) {
+		placements = placements.map((p) => ({ ...p, x: p.x + shift.xMm, y: p.y + shift.yMm }));
+		cog = cargoCentre(c, pieceItems, placements);
+	}
+	const warnings = centreOfGravityWarnings(cog);
+	if (shift.xMm > 0) warnings.push(frontGapWarning(shift.xMm));
 	return {
 		index,
 		containerTypeId: c.source.id,
@@ -80,7 +102,17 @@ function containerLoad(
 		payloadKg: kg.toFixed(3, Decimal.ROUND_HALF_UP),
 		payloadUtilisation: share(kg, new Decimal(c.source.maxPayloadKg)),
 		centreOfGravity: cog,
-		warnings: centreOfGravityWarnings(cog)
+		warnings,
+		shift
+	};
+}
+
+/** Lowest and highest coordinate of some [from, to) ranges (0, 0 for none). */
+function span(ranges: [number, number][]): Extent1 {
+	if (ranges.length === 0) return { lo: 0, hi: 0 };
+	return {
+		lo: Math.min(...ranges.map((r) => r[0])),
+		hi: Math.max(...ranges.map((r) => r[1]))
 	};
 }
 
@@ -125,7 +157,10 @@ export function planLoad(input: LoadPlanInput): LoadPlanResult {
 				elapsedMs: Math.round(performance.now() - start)
 			})
 	});
-	const loads = mix.fills.map((f, i) => containerLoad(i + 1, containers[f.type]!, items, f.fill));
+	const balance = (options.stowAt ?? 'balanced') === 'balanced';
+	const loads = mix.fills.map((f, i) =>
+		containerLoad(i + 1, containers[f.type]!, items, f.fill, balance)
+	);
 	const stoppedBy = mix.stoppedBy;
 	const reason =
 		maxContainers === 1

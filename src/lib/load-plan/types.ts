@@ -77,6 +77,13 @@ export interface LoadPlanOptions {
 	workBudget?: number;
 	/** Tie-break seed; the same input and seed give the same plan. Default 1. */
 	seed?: number;
+	/**
+	 * 'balanced' (default): a stow shorter (or narrower) than the container is moved as a whole
+	 * towards the door (or across) so that its centre of gravity comes nearest the middle; the gap
+	 * at the front wall must then be braced (a warning says so). 'frontWall': the stow stays
+	 * against the front and left walls as built. See stow-shift.ts.
+	 */
+	stowAt?: 'balanced' | 'frontWall';
 	/** At most this many containers are opened. Default 100. */
 	maxContainers?: number;
 	onProgress?: (progress: LoadPlanProgress) => void;
@@ -134,6 +141,11 @@ export interface ContainerLoad {
 	payloadUtilisation: string;
 	centreOfGravity: CentreOfGravity | null;
 	warnings: string[];
+	/**
+	 * How far the whole stow was moved from the front wall (x, towards the door) and across (y,
+	 * positive towards the right wall) to balance it; the placements already include it.
+	 */
+	shift?: { xMm: number; yMm: number };
 }
 
 export interface UnplacedItems {

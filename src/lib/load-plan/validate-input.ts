@@ -153,6 +153,9 @@ function checkOptions(v: unknown, containerIds: string[], problems: Problem[]): 
 			message: `Enter a whole number of work units from 1 to ${MAX_WORK_BUDGET}.`
 		});
 	}
+	if (v.stowAt !== undefined && v.stowAt !== 'balanced' && v.stowAt !== 'frontWall') {
+		problems.push({ path: 'options.stowAt', message: "Choose 'balanced' or 'frontWall'." });
+	}
 	if (v.seed !== undefined && !(typeof v.seed === 'number' && Number.isSafeInteger(v.seed))) {
 		problems.push({ path: 'options.seed', message: 'Enter a whole number.' });
 	}
