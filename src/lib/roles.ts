@@ -59,12 +59,14 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 	const products = { href: '/products', label: 'Products' };
 	const trace = { href: '/trace', label: 'Trace a serial' };
 	const equipment = { href: '/equipment', label: 'Pallets & containers' };
+	const places = { href: '/places', label: 'Places & parties' };
 	switch (role) {
 		case 'admin':
 			return [
 				overview,
 				shipments,
 				products,
+				places,
 				equipment,
 				trace,
 				{ href: '/organizations', label: 'Organizations' },
@@ -76,6 +78,7 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 				overview,
 				shipments,
 				products,
+				places,
 				equipment,
 				trace,
 				{ href: '/organizations', label: 'Organizations' }

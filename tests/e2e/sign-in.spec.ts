@@ -6,6 +6,7 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Overview',
 		'Shipments',
 		'Products',
+		'Places & parties',
 		'Pallets & containers',
 		'Trace a serial',
 		'Organizations',
@@ -16,6 +17,7 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Overview',
 		'Shipments',
 		'Products',
+		'Places & parties',
 		'Pallets & containers',
 		'Trace a serial',
 		'Organizations'
