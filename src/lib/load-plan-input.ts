@@ -6,7 +6,7 @@
  *
  * Pure module: no framework imports.
  */
-import { palletItem, type LoadContainerType, type LoadItemType } from './load-plan';
+import { palletItem, type LoadContainerType, type LoadItemType, type LoadPlan } from './load-plan';
 import type { MeasureResult } from './packing';
 
 type Measured = Extract<MeasureResult, { ok: true }>;
@@ -37,8 +37,9 @@ export interface LoadItemInfo {
 	kind: 'carton' | 'pallet';
 	/** Line number (1-based) on the shipment. */
 	line: number;
-	/** Carton or pallet numbers it stands for, e.g. "cartons 1–119". */
+	/** Carton or pallet numbers it stands for, e.g. "cartons 1–119", and the first of them. */
 	numbers: string;
+	first: number;
 	count: number;
 }
 
@@ -48,6 +49,22 @@ export interface ShipmentLoadInput {
 	info: LoadItemInfo[];
 	/** Container type id (its code) → name. */
 	containerNames: Record<string, string>;
+}
+
+/** A shipment's load plan as the API and the shipment page give it. */
+export interface ShipmentLoadPlanView {
+	shipmentId: string;
+	reference: string;
+	/** The shipment revision the plan was made for. */
+	version: number;
+	computedAt: string;
+	/** true: read from the cache, not computed by this request. */
+	cached: boolean;
+	items: LoadItemType[];
+	/** Per item type: its SKU, line and carton or pallet numbers. */
+	info: LoadItemInfo[];
+	containerTypes: (LoadContainerType & { name: string })[];
+	plan: LoadPlan;
 }
 
 function range(noun: string, from: number, to: number): string {
@@ -96,7 +113,15 @@ function cartonItems(measured: Measured, handling: ReadonlyMap<string, CartonHan
 			};
 			if (how.maxLoadOnTopKg !== null) item.maxLoadOnTopKg = string(how.maxLoadOnTopKg);
 			items.push(item);
-			info.push({ id, sku: line.sku, kind: 'carton', line: n, numbers, count: group.cartons });
+			info.push({
+				id,
+				sku: line.sku,
+				kind: 'carton',
+				line: n,
+				numbers,
+				first: group.fromCarton,
+				count: group.cartons
+			});
 		}
 	}
 	return { items, info };
@@ -122,7 +147,15 @@ function palletItems(pallets: NonNullable<Measured['pallets']>) {
 					count: group.pallets
 				})
 			);
-			info.push({ id, sku: line.sku, kind: 'pallet', line: n, numbers, count: group.pallets });
+			info.push({
+				id,
+				sku: line.sku,
+				kind: 'pallet',
+				line: n,
+				numbers,
+				first: group.fromPallet,
+				count: group.pallets
+			});
 		}
 	}
 	return { items, info };

@@ -34,6 +34,8 @@ export interface Label {
 	text: string;
 	x: number;
 	y: number;
+	/** Set the text above the point (else below it). */
+	above?: boolean;
 }
 
 export interface Drawing {
@@ -153,15 +155,16 @@ function isoDrawing(
 		line(P(L, 0, H), P(L, W, H)),
 		line(P(0, W, H), P(L, W, H))
 	);
-	// Where the door and the front wall are, wherever the turn put them.
+	// Where the door and the front wall are, wherever the turn put them: above the top edge of
+	// each end, clear of the cargo.
 	const ends = [
 		{ text: 'Door', at: { x: size.lengthMm, y: size.widthMm / 2 } },
 		{ text: 'Front wall', at: { x: 0, y: size.widthMm / 2 } }
 	];
 	const labels = ends.map(({ text, at }) => {
 		const t = turnBox({ x: at.x, y: at.y, z: 0, dx: 0, dy: 0, dz: 0 }, size, turn);
-		const [x, y] = P(t.x, t.y, 0);
-		return { text, x, y };
+		const [x, y] = P(t.x, t.y, H);
+		return { text, x, y, above: true };
 	});
 	const corners = [0, L].flatMap((u) => [0, W].flatMap((v) => [0, H].map((z) => P(u, v, z))));
 	return { shapes, labels, bounds: boundsOf(corners) };

@@ -6,13 +6,15 @@
 import { createHash } from 'node:crypto';
 import {
 	DEFAULT_TIME_BUDGET_MS,
-	type LoadContainerType,
-	type LoadItemType,
 	type LoadPlan,
 	type LoadPlanInput,
 	type LoadPlanProgress
 } from '../../load-plan';
-import { shipmentLoadInput, type CartonHandling, type LoadItemInfo } from '../../load-plan-input';
+import {
+	shipmentLoadInput,
+	type CartonHandling,
+	type ShipmentLoadPlanView
+} from '../../load-plan-input';
 import type { Problem } from '../../packing';
 import type { SessionUser } from '../auth/session-user';
 import { ContainerTypeRow, ShipmentLoadPlan } from '../db/models';
@@ -22,20 +24,7 @@ import { measureShipment } from './shipment-measure';
 /** Bump when the stored plan's meaning changes, so older rows are computed afresh. */
 const CACHE_FORMAT = 1;
 
-export interface ShipmentLoadPlanView {
-	shipmentId: string;
-	reference: string;
-	/** The shipment revision the plan was made for. */
-	version: number;
-	computedAt: string;
-	/** true: read from the cache, not computed by this request. */
-	cached: boolean;
-	items: LoadItemType[];
-	/** Per item type: its SKU, line and carton or pallet numbers. */
-	info: LoadItemInfo[];
-	containerTypes: (LoadContainerType & { name: string })[];
-	plan: LoadPlan;
-}
+export type { ShipmentLoadPlanView };
 
 export type LoadPlanRefusal = {
 	ok: false;
