@@ -50,6 +50,7 @@ export interface PlacedBox extends Box {
 }
 
 const FRAME = '#4a5563';
+const NEAR_FRAME = '#a3adb8';
 const FLOOR = '#eef1f4';
 const COS30 = Math.sqrt(3) / 2;
 const SIN30 = 0.5;
@@ -72,8 +73,8 @@ function boundsOf(points: Point[]): Drawing['bounds'] {
 	return { minX, minY, maxX, maxY };
 }
 
-function line(a: Point, b: Point): Shape {
-	return { kind: 'line', points: [a, b], fill: null, stroke: FRAME, weight: 'frame' };
+function line(a: Point, b: Point, stroke = FRAME): Shape {
+	return { kind: 'line', points: [a, b], fill: null, stroke, weight: 'frame' };
 }
 
 function itemShape(points: Point[], fill: string, item: number, highlight: boolean): Shape {
@@ -148,12 +149,13 @@ function isoDrawing(
 			);
 		}
 	}
+	// The near edges, lighter: they pass in front of the cargo.
 	shapes.push(
 		line(P(L, 0, 0), P(L, W, 0)),
 		line(P(0, W, 0), P(L, W, 0)),
-		line(P(L, W, 0), P(L, W, H)),
-		line(P(L, 0, H), P(L, W, H)),
-		line(P(0, W, H), P(L, W, H))
+		line(P(L, W, 0), P(L, W, H), NEAR_FRAME),
+		line(P(L, 0, H), P(L, W, H), NEAR_FRAME),
+		line(P(0, W, H), P(L, W, H), NEAR_FRAME)
 	);
 	// Where the door and the front wall are, wherever the turn put them: above the top edge of
 	// each end, clear of the cargo.
