@@ -74,6 +74,19 @@ test('the pages a coordinator works in', async ({ page }) => {
 	await expectAccessible(page, 'product detail');
 });
 
+test('the load-plan panel of a shipment, computed', async ({ page }) => {
+	test.setTimeout(90_000);
+	await signInPage(page, DEMO.coordinator);
+	await page.goto('/shipments');
+	await page.getByRole('link', { name: /^SHP-/ }).first().click();
+	const panel = page.getByRole('region', { name: 'Container load plan' });
+	await panel.getByRole('button', { name: /^Compute/ }).click();
+	await expect(panel.getByRole('img', { name: /^Three-dimensional view/ })).toBeVisible({
+		timeout: 30_000
+	});
+	await expectAccessible(page, 'shipment detail with its load plan');
+});
+
 test('the master-data pages a coordinator edits', async ({ page }) => {
 	test.setTimeout(120_000);
 	await signInPage(page, DEMO.coordinator);

@@ -291,6 +291,16 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			}
 		]
 	},
+	'/api/v1/calc/load-plan': {
+		api: [
+			{
+				method: 'POST',
+				path: '/api/v1/calc/load-plan',
+				body: {},
+				expect: { anonymous: 401, customer: 403, default: 400 }
+			}
+		]
+	},
 	'/api/v1/shipments': {
 		api: [
 			{ method: 'GET', path: '/api/v1/shipments', expect: API_200 },
@@ -311,6 +321,12 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 		api: [
 			{ method: 'GET', path: '/api/v1/shipments/:ship/measure', expect: API_200 },
 			{ method: 'GET', path: '/api/v1/shipments/:otherShip/measure', expect: OTHER_SHIPMENT_API }
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/load-plan': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:ship/load-plan', expect: API_200 },
+			{ method: 'GET', path: '/api/v1/shipments/:otherShip/load-plan', expect: OTHER_SHIPMENT_API }
 		]
 	}
 };

@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import { measureInputSchema, measureResultSchema } from '../packing/schema';
 import { createUserSchema, updateUserSchema } from '../schemas/users';
+import {
+	API_MAX_PIECES,
+	API_MAX_TIME_BUDGET_MS,
+	loadPlanInputSchema,
+	loadPlanSchema
+} from '../schemas/load-plan';
 import { productSchema } from '../schemas/products';
 import { shipmentLinesSchema, shipmentListQuerySchema, shipmentSchema } from '../schemas/shipments';
 
@@ -80,6 +86,27 @@ export function openApiDocument(origin: string) {
 					responses: { 200: ok('Measure'), ...errors }
 				}
 			},
+			'/shipments/{shipmentId}/load-plan': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Container load plan of the current revision (cached, else computed)',
+					description:
+						'Cartons (or loaded pallets) of the shipment planned into every container type. Computed in a worker with a time budget of about 3 s, then cached for this revision. Send `Accept: application/x-ndjson` to receive `{ type: "progress" }` lines and then one `{ type: "result", value }` or `{ type: "error" }` line. 409: the shipment cannot be planned (issues name why); 503: the planner was busy or stopped. A plan is guidance: the carrier, the CTU Code and trained staff decide securing, weight distribution and dangerous goods.',
+					responses: {
+						200: ok('Load plan with the items and container types'),
+						...errors,
+						503: error
+					}
+				}
+			},
+			'/calc/load-plan': {
+				post: {
+					summary: 'Plan items into containers without storing anything',
+					description: `At most ${API_MAX_PIECES} pieces and ${API_MAX_TIME_BUDGET_MS} ms of search per request.`,
+					requestBody: body('LoadPlanInput'),
+					responses: { 200: ok('Load plan', 'LoadPlan'), ...errors, 503: error }
+				}
+			},
 			'/calc/measure': {
 				post: {
 					summary: 'Measure products and lines without storing anything',
@@ -125,6 +152,8 @@ export function openApiDocument(origin: string) {
 				ShipmentLines: schema(shipmentLinesSchema),
 				MeasureInput: schema(measureInputSchema),
 				MeasureResult: schema(measureResultSchema),
+				LoadPlanInput: schema(loadPlanInputSchema),
+				LoadPlan: schema(loadPlanSchema),
 				Product: schema(productSchema),
 				CreateUser: schema(createUserSchema),
 				UpdateUser: schema(updateUserSchema)

@@ -17,6 +17,7 @@ import {
 	ShipmentStatusEvent,
 	initShipmentModels
 } from './shipment';
+import { initShipmentLoadPlanModel } from './shipment-load-plan';
 import { User, initUserModel } from './user';
 
 export * from './api-token';
@@ -26,6 +27,7 @@ export * from './organization';
 export * from './place';
 export * from './product';
 export * from './shipment';
+export * from './shipment-load-plan';
 export * from './user';
 
 let initialised: Sequelize | undefined;
@@ -43,6 +45,7 @@ export function initModels(sequelize: Sequelize): void {
 	initPlaceModels(sequelize);
 	initProductModels(sequelize);
 	initShipmentModels(sequelize);
+	initShipmentLoadPlanModel(sequelize);
 
 	Organization.hasMany(OrganizationAddress, { foreignKey: 'organizationId', as: 'addresses' });
 	OrganizationAddress.belongsTo(Organization, { foreignKey: 'organizationId' });

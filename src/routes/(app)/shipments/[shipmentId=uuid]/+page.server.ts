@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import { cachedLoadPlan } from '$lib/server/services/load-plan';
 import { addLot, addLots, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
@@ -24,6 +25,7 @@ import {
 	shipmentSchema,
 	statusChangeSchema
 } from '$lib/schemas/shipments';
+import { isStaff } from '$lib/roles';
 import { allowedTransitions } from '$lib/trade/shipment-status';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -70,23 +72,25 @@ export const load: PageServerLoad = async (event) => {
 		quantity: l.quantity,
 		unitPrice: l.unitPrice
 	}));
-	const [headerForm, linesForm, containerForm, lotForm, lotImportForm, lots] = await Promise.all([
-		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
-		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
-			errors: false,
-			id: 'lines'
-		}),
-		superValidate({ version: shipment.version }, zod4(containerSchema), {
-			errors: false,
-			id: 'container'
-		}),
-		superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
-		superValidate({ lots: [], version: shipment.version }, zod4(lotImportSchema), {
-			errors: false,
-			id: 'lot-import'
-		}),
-		listLots(shipment.id)
-	]);
+	const [headerForm, linesForm, containerForm, lotForm, lotImportForm, lots, loadPlan] =
+		await Promise.all([
+			superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
+			superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
+				errors: false,
+				id: 'lines'
+			}),
+			superValidate({ version: shipment.version }, zod4(containerSchema), {
+				errors: false,
+				id: 'container'
+			}),
+			superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
+			superValidate({ lots: [], version: shipment.version }, zod4(lotImportSchema), {
+				errors: false,
+				id: 'lot-import'
+			}),
+			listLots(shipment.id),
+			cachedLoadPlan(user, shipment.id)
+		]);
 	return {
 		shipment,
 		measure: result,
@@ -99,7 +103,9 @@ export const load: PageServerLoad = async (event) => {
 		containerForm,
 		lotForm,
 		lotImportForm,
-		lots
+		lots,
+		loadPlan,
+		canPlanLoad: isStaff(user.role)
 	};
 };
 

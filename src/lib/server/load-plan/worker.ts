@@ -1,0 +1,35 @@
+/**
+ * The load planner's worker thread. This module is loaded twice: in the main thread only for
+ * WORKER_URL (its own file, wherever the build put it), and as the worker itself, where it runs
+ * planLoad once on the input in workerData and posts progress and the result back.
+ */
+import { isMainThread, parentPort, workerData } from 'node:worker_threads';
+import { planLoad, type LoadPlanInput, type LoadPlanProgress } from '../../load-plan';
+
+export const WORKER_URL = import.meta.url;
+export const JOB_TAG = 'landfall-load-plan';
+
+export type WorkerMessage =
+	| { type: 'progress'; progress: LoadPlanProgress }
+	| { type: 'result'; result: ReturnType<typeof planLoad> };
+
+/** Progress at most this often: the planner may report many improvements per second. */
+const PROGRESS_EVERY_MS = 150;
+
+if (!isMainThread && parentPort && workerData?.tag === JOB_TAG) {
+	const port = parentPort;
+	const input = workerData.input as LoadPlanInput;
+	let last = -Infinity;
+	const result = planLoad({
+		...input,
+		options: {
+			...input.options,
+			onProgress: (progress) => {
+				if (progress.elapsedMs - last < PROGRESS_EVERY_MS) return;
+				last = progress.elapsedMs;
+				port.postMessage({ type: 'progress', progress } satisfies WorkerMessage);
+			}
+		}
+	});
+	port.postMessage({ type: 'result', result } satisfies WorkerMessage);
+}
