@@ -421,7 +421,12 @@ test.describe('access per role', () => {
 		const { rows } = (await list.json()) as {
 			rows: { id: string; customerName: string }[];
 		};
-		ids.ship = rows.find((r) => r.customerName.startsWith('Hallvik'))!.id;
+		// Hallvik's shipment that broker Kaaiman is assigned to (asked as the broker: other tests may
+		// be creating Hallvik shipments without a broker meanwhile).
+		const brokerList = (await (
+			await clients.get('broker')!.get('/api/v1/shipments?pageSize=200')
+		).json()) as { rows: { id: string; customerName: string }[] };
+		ids.ship = brokerList.rows.find((r) => r.customerName.startsWith('Hallvik'))!.id;
 		ids.otherShip = rows.find((r) => r.customerName.startsWith('Wattlebird'))!.id;
 		const productsPage = await admin.get('/products');
 		ids.product = /\/products\/([0-9a-f-]{36})/.exec(await productsPage.text())![1]!;
