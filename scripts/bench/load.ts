@@ -14,7 +14,7 @@ import { existsSync } from 'node:fs';
 import os from 'node:os';
 import { resolve } from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { planLoad, validatePlan } from '../../src/lib/load-plan';
+import { WORK_PER_MS, planLoad, validatePlan } from '../../src/lib/load-plan';
 import { brInput, readBrSet } from './load-br';
 import { PUBLISHED } from './load-published';
 
@@ -49,7 +49,7 @@ console.log(
 );
 console.log(`Data: ${data}`);
 console.log(
-	`Full support (100 %), orientation flags of the data; time budget ${budget} ms per instance, one core; first ${perSet} instances per set`
+	`Full support (100 %), orientation flags of the data; budget ${budget} ms = ${budget * WORK_PER_MS} work units per instance, one core; first ${perSet} instances per set`
 );
 console.log('');
 

@@ -69,8 +69,8 @@ export interface LoadPlanOptions {
 	/**
 	 * Budget of the whole search, ms on the benchmark machine: it is turned into a fixed count of
 	 * work (× WORK_PER_MS, see work-budget.ts), so the plan does not depend on the machine's speed
-	 * or load. Default 3000. The wall clock stops the search only as a safety net at 5 × this
-	 * budget + 2 s (`search.stoppedBy` is then 'time').
+	 * or load. Default 3000. The wall clock stops the search only as a safety net at 10 × this
+	 * budget + 5 s (`search.stoppedBy` is then 'time').
 	 */
 	timeBudgetMs?: number;
 	/** Work budget in units (overrides the one derived from timeBudgetMs). */
