@@ -166,8 +166,15 @@ export const loadPlanSchema = z
 		unplaced: z.array(z.object({ itemTypeId: z.string(), count: int, reason: z.string() })),
 		search: z.object({
 			elapsedMs: int,
-			stoppedBy: z.enum(['complete', 'time']),
+			stoppedBy: z
+				.enum(['complete', 'work', 'time'])
+				.describe(
+					"'work': the work budget ended the search (the same plan on any machine); " +
+						"'time': the wall-clock safety stop did (best so far)."
+				),
 			timeBudgetMs: int,
+			workBudget: int.optional(),
+			workUsed: int.optional(),
 			seed: int
 		})
 	})
