@@ -309,16 +309,15 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 	let gross = ZERO;
 	let volume = ZERO;
 	for (const input of inputs) {
-		const result = packCartons(input, next);
-		if (!result.ok) return result; // unreachable: inputs were checked above
-		lines.push(result.line);
-		next = result.line.lastCarton + 1;
+		// Inputs were checked above: pack and weigh each line once.
+		const product = cartonProduct(input.netKgPerUnit, input.packaging);
+		const { line, masses } = packProductCartons(product, input.quantity, next);
+		lines.push(line);
+		next = line.lastCarton + 1;
 		units += input.quantity;
-		const masses = cartonMasses(input);
 		net = net.plus(masses.net);
 		gross = gross.plus(masses.gross);
-		const { lengthMm, widthMm, heightMm } = input.packaging;
-		volume = volume.plus(boxM3(lengthMm, widthMm, heightMm).times(result.line.cartons));
+		volume = volume.plus(product.cartonM3.times(line.cartons));
 	}
 	return {
 		ok: true,
