@@ -1,0 +1,109 @@
+/**
+ * What the papers are made from: the shipment as stored, gathered by the server into plain data.
+ * `readiness()` checks it; `buildInvoice()` and `buildPackingList()` turn it into snapshots.
+ *
+ * Pure module: no framework imports.
+ */
+import type { MeasureResult } from '../packing';
+
+export interface SourceParty {
+	name: string;
+	line1: string | null;
+	line2: string | null;
+	postalCode: string | null;
+	city: string | null;
+	region: string | null;
+	countryCode: string;
+	taxIds: { type: string; value: string }[];
+	contactName: string | null;
+	email: string | null;
+	phone: string | null;
+}
+
+export interface SourcePlace {
+	code: string;
+	name: string;
+	countryCode: string;
+}
+
+export interface SourceLine {
+	position: number;
+	sku: string;
+	description: string;
+	hsCode: string | null;
+	originCountry: string | null;
+	/** kg per unit as stored, or null when the product has none. */
+	netKgPerUnit: string | null;
+	hasPackaging: boolean;
+	quantity: number;
+	unitPrice: string;
+}
+
+export interface SourceLot {
+	sku: string;
+	cartonFrom: number;
+	cartonTo: number;
+	lotNumber: string;
+	serialFrom: string | null;
+	serialTo: string | null;
+}
+
+/** The papers' own fields on the shipment (payment terms, signatory…), null when not set. */
+export interface PaperDetails {
+	paymentTerms: string | null;
+	exportReason: string | null;
+	/** In the shipment's currency, up to 4 decimals. */
+	freightAmount: string | null;
+	insuranceAmount: string | null;
+	marks: string | null;
+	signatoryName: string | null;
+	signatoryTitle: string | null;
+	signingPlace: string | null;
+}
+
+export interface DocumentSource {
+	reference: string;
+	status: string;
+	incoterm: string;
+	incotermPlace: string;
+	currency: string;
+	chosenMode: string | null;
+	carrier: string | null;
+	vessel: string | null;
+	voyageOrFlight: string | null;
+	bookingNumber: string | null;
+	etd: string | null;
+	eta: string | null;
+	details: PaperDetails;
+	exporter: SourceParty | null;
+	buyer: SourceParty | null;
+	consignee: SourceParty | null;
+	notifyParty: SourceParty | null;
+	origin: SourcePlace | null;
+	destination: SourcePlace | null;
+	containers: { number: string; seal: string | null; type: string | null }[];
+	lines: SourceLine[];
+	measure: MeasureResult;
+	/** Name of the pallet type, when the cartons travel on pallets. */
+	palletType: string | null;
+	lots: SourceLot[];
+	loadPlan: {
+		containers: {
+			label: string;
+			type: string;
+			pieces: number;
+			volumeUsedPercent: string;
+			payloadKg: string;
+		}[];
+		unplaced: number;
+	} | null;
+}
+
+/** Number, revision and date of the paper being issued. */
+export interface IssueStamp {
+	number: string;
+	revision: string;
+	revisionReason: string | null;
+	/** YYYY-MM-DD. */
+	issuedOn: string;
+}
