@@ -14,7 +14,7 @@ import {
 	strongText,
 	textHeight
 } from './layout';
-import type { Doc, PageFrame } from './layout';
+import { PageFrame, createDocument, type Doc } from './layout';
 
 /** Title on the left, number / revision / date / shipment on the right, an accent rule below. */
 export function drawRunningHeader(doc: Doc, h: DocumentHeader): number {
@@ -211,4 +211,41 @@ export function writeCautions(frame: PageFrame, cautions: readonly string[]): vo
 		});
 		frame.y += ch + 2;
 	}
+}
+
+/**
+ * The opening of both papers: the file, page 1 with its running header, the revision note, the
+ * four parties and the shipment and transport facts (`extra` adds the paper's own).
+ */
+export function openPaper(
+	h: DocumentHeader,
+	snapshot: unknown,
+	exporterLabel: string,
+	extra: { label: string; value: string; wide?: boolean }[] = []
+): PageFrame {
+	const doc = createDocument({
+		title: `${h.title} ${h.number} revision ${h.revision}`,
+		subject: `Shipment ${h.shipmentReference}`,
+		issuedOn: h.issuedOn,
+		snapshot
+	});
+	const frame = new PageFrame(doc, (d) => drawRunningHeader(d, h));
+	frame.newPage();
+	writeRevisionNote(frame, h);
+	writeParties(frame, [
+		{ label: exporterLabel, party: h.exporter },
+		{ label: 'Buyer', party: h.buyer },
+		{ label: 'Consignee', party: h.consignee },
+		{ label: 'Notify party', party: h.notifyParty, none: 'Same as consignee' }
+	]);
+	rule(doc, frame.y - 4);
+	frame.gap(4);
+	writeFacts(frame, transportFacts(h, extra));
+	frame.gap(4);
+	return frame;
+}
+
+/** The document's name in the footer: 'Packing list PL-2026-00017 rev. B'. */
+export function paperName(h: DocumentHeader): string {
+	return `${h.title} ${h.number}${h.revision === 'A' ? '' : ` rev. ${h.revision}`}`;
 }

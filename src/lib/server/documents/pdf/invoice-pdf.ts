@@ -4,26 +4,15 @@
  */
 import { formatAmount, formatCount, formatFixed, formatKg } from '../../../documents/format';
 import type { InvoiceCharge, InvoiceLine, InvoiceSnapshot } from '../../../documents/types';
-import {
-	drawRunningHeader,
-	sectionTitle,
-	transportFacts,
-	writeCautions,
-	writeFacts,
-	writeMarks,
-	writeParties,
-	writeRevisionNote
-} from './blocks';
+import { openPaper, paperName, sectionTitle, writeCautions, writeMarks } from './blocks';
 import {
 	COLOUR,
 	CONTENT_WIDTH,
 	MARGIN,
 	PageFrame,
 	SIZE,
-	createDocument,
 	finish,
 	plainText,
-	rule,
 	strongText,
 	textHeight
 } from './layout';
@@ -177,32 +166,11 @@ function writeDeclaration(frame: PageFrame, s: InvoiceSnapshot): void {
 export async function renderInvoicePdf(
 	s: InvoiceSnapshot
 ): Promise<{ pdf: Buffer; pages: number }> {
-	const doc = createDocument({
-		title: `${s.title} ${s.number} revision ${s.revision}`,
-		subject: `Shipment ${s.shipmentReference}`,
-		issuedOn: s.issuedOn,
-		snapshot: s
-	});
-	const frame = new PageFrame(doc, (d) => drawRunningHeader(d, s));
-	frame.newPage();
-	writeRevisionNote(frame, s);
-	writeParties(frame, [
-		{ label: 'Exporter / seller', party: s.exporter },
-		{ label: 'Buyer', party: s.buyer },
-		{ label: 'Consignee', party: s.consignee },
-		{ label: 'Notify party', party: s.notifyParty, none: 'Same as consignee' }
+	const frame = openPaper(s, s, 'Exporter / seller', [
+		{ label: 'Invoice currency', value: s.currency },
+		{ label: 'Terms of payment', value: s.paymentTerms },
+		{ label: 'Reason for export', value: s.exportReason }
 	]);
-	rule(doc, frame.y - 4);
-	frame.gap(4);
-	writeFacts(
-		frame,
-		transportFacts(s, [
-			{ label: 'Invoice currency', value: s.currency },
-			{ label: 'Terms of payment', value: s.paymentTerms },
-			{ label: 'Reason for export', value: s.exportReason }
-		])
-	);
-	frame.gap(4);
 	writeTable(
 		frame,
 		columns(s.currency),
@@ -212,5 +180,5 @@ export async function renderInvoicePdf(
 	writeMarks(frame, s.marks, `Packages: ${s.packages.text}`);
 	writeDeclaration(frame, s);
 	writeCautions(frame, s.cautions);
-	return finish(doc, `${s.title} ${s.number}${s.revision === 'A' ? '' : ` rev. ${s.revision}`}`);
+	return finish(frame.doc, paperName(s));
 }

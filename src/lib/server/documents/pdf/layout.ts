@@ -78,36 +78,37 @@ export function createDocument(meta: DocumentMeta): Doc {
 	return doc;
 }
 
-/** Text set heavier by stroking its outline as well as filling it (the font has no bold cut). */
-export function strongText(
+export type TextStyle = PDFKit.Mixins.TextOptions & { colour?: string; size?: number };
+
+/**
+ * Text at (x, y). `strong` sets it heavier by stroking its outline as well as filling it: the
+ * font the app ships has no bold cut.
+ */
+function writeText(
 	doc: Doc,
 	text: string,
 	x: number,
 	y: number,
-	options: PDFKit.Mixins.TextOptions & { colour?: string; size?: number } = {}
-): void {
-	const { colour = COLOUR.ink, size = SIZE.body, ...rest } = options;
+	style: TextStyle,
+	strong: boolean
+) {
+	const { colour = COLOUR.ink, size = SIZE.body, ...rest } = style;
 	doc.save();
 	doc
 		.fontSize(size)
 		.fillColor(colour)
 		.strokeColor(colour)
 		.lineWidth(size / 40);
-	doc.text(text, x, y, { ...rest, fill: true, stroke: true });
+	doc.text(text, x, y, strong ? { ...rest, fill: true, stroke: true } : rest);
 	doc.restore();
-	doc.fillColor(COLOUR.ink);
 }
 
-export function plainText(
-	doc: Doc,
-	text: string,
-	x: number,
-	y: number,
-	options: PDFKit.Mixins.TextOptions & { colour?: string; size?: number } = {}
-): void {
-	const { colour = COLOUR.ink, size = SIZE.body, ...rest } = options;
-	doc.fontSize(size).fillColor(colour).text(text, x, y, rest);
-	doc.fillColor(COLOUR.ink);
+export function strongText(doc: Doc, text: string, x: number, y: number, style: TextStyle = {}) {
+	writeText(doc, text, x, y, style, true);
+}
+
+export function plainText(doc: Doc, text: string, x: number, y: number, style: TextStyle = {}) {
+	writeText(doc, text, x, y, style, false);
 }
 
 export function textHeight(doc: Doc, text: string, width: number, size: number): number {

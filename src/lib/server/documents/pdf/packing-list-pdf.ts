@@ -5,24 +5,14 @@
 import { formatCount, formatDims, formatKg, formatM3 } from '../../../documents/format';
 import type { PackingListSnapshot, PackingRow } from '../../../documents/types';
 import {
-	drawRunningHeader,
+	openPaper,
+	paperName,
 	sectionTitle,
-	transportFacts,
 	writeCautions,
 	writeFacts,
-	writeMarks,
-	writeParties,
-	writeRevisionNote
+	writeMarks
 } from './blocks';
-import {
-	CONTENT_BOTTOM,
-	CONTENT_WIDTH,
-	MARGIN,
-	PageFrame,
-	createDocument,
-	finish,
-	rule
-} from './layout';
+import { CONTENT_BOTTOM, CONTENT_WIDTH, MARGIN, PageFrame, finish, rule } from './layout';
 import { drawPicture, type LoadPlanPictureForPdf } from './pictures';
 import { writeTable, type Cell, type Column } from './table';
 
@@ -150,25 +140,7 @@ export async function renderPackingListPdf(
 	s: PackingListSnapshot,
 	pictures: readonly LoadPlanPictureForPdf[] = []
 ): Promise<{ pdf: Buffer; pages: number }> {
-	const doc = createDocument({
-		title: `${s.title} ${s.number} revision ${s.revision}`,
-		subject: `Shipment ${s.shipmentReference}`,
-		issuedOn: s.issuedOn,
-		snapshot: { s, pictures }
-	});
-	const frame = new PageFrame(doc, (d) => drawRunningHeader(d, s));
-	frame.newPage();
-	writeRevisionNote(frame, s);
-	writeParties(frame, [
-		{ label: 'Exporter / shipper', party: s.exporter },
-		{ label: 'Buyer', party: s.buyer },
-		{ label: 'Consignee', party: s.consignee },
-		{ label: 'Notify party', party: s.notifyParty, none: 'Same as consignee' }
-	]);
-	rule(doc, frame.y - 4);
-	frame.gap(4);
-	writeFacts(frame, transportFacts(s));
-	frame.gap(4);
+	const frame = openPaper(s, { s, pictures }, 'Exporter / shipper');
 	writeTable(frame, COLUMNS, s.rows.map(row), { footer: totalsRow(s) });
 	frame.gap(8);
 	writeFacts(frame, packageFacts(s), 4);
@@ -176,5 +148,5 @@ export async function renderPackingListPdf(
 	writeMarks(frame, s.marks, `Cartons numbered 1–${s.totals.cartons}`);
 	writeCautions(frame, s.cautions);
 	writePictures(frame, pictures);
-	return finish(doc, `${s.title} ${s.number}${s.revision === 'A' ? '' : ` rev. ${s.revision}`}`);
+	return finish(frame.doc, paperName(s));
 }
