@@ -29,7 +29,8 @@ export function drawPicture(
 	const { minX, minY, maxX, maxY } = picture.drawing.bounds;
 	const scale = Math.min(area.width / (maxX - minX || 1), area.height / (maxY - minY || 1));
 	const offX = area.x + (area.width - (maxX - minX) * scale) / 2;
-	const offY = area.y + (area.height - (maxY - minY) * scale) / 2;
+	// Top-aligned: a flat view is short, and its legend follows right under it.
+	const offY = area.y;
 	const at = (px: number, py: number): [number, number] => [
 		offX + (px - minX) * scale,
 		offY + (py - minY) * scale
