@@ -13,10 +13,23 @@ import {
 	addContainer,
 	changeStatus,
 	createShipment,
-	replaceLines
+	replaceLines,
+	updatePaperDetails
 } from '../src/lib/server/services/shipments';
 import { addLot } from '../src/lib/server/services/shipment-lots';
+import { issuePapers } from '../src/lib/server/services/documents/issue';
 import type { ShipmentStatus } from '../src/lib/trade/shipment-status';
+
+// What the demo papers print; the signatory is an invented person.
+const PAPERS = {
+	exportReason: 'Sale',
+	freightAmount: '',
+	insuranceAmount: '',
+	marks: '',
+	signatoryName: 'Nurul Aisyah Rahim',
+	signatoryTitle: 'Export coordinator',
+	signingPlace: 'Bayan Lepas, Penang'
+};
 
 // A few demo shipments, created through the same services the app uses. Idempotent: each is
 // found again by its notes marker. Container numbers are invented but carry valid ISO 6346 digits.
@@ -41,6 +54,7 @@ const DEMO = [
 			['SLV-PWR-20K', 900]
 		] as const,
 		status: ['booked'] as ShipmentStatus[],
+		paymentTerms: '30 days net from the bill of lading date',
 		containers: [{ number: 'CSQU3054383', type: 'C40HC', seal: 'SLV-0042117' }],
 		lots: [
 			{
@@ -97,6 +111,7 @@ const DEMO = [
 			['SLV-PWR-20K', 600]
 		] as const,
 		status: ['booked', 'documents_issued', 'in_transit'] as ShipmentStatus[],
+		paymentTerms: 'Documentary collection, documents against payment',
 		containers: [{ number: 'LDFU1234567', type: 'C40GP', seal: 'SLV-0041980' }]
 	}
 ];
@@ -178,8 +193,23 @@ export async function seed(_sequelize: Sequelize): Promise<void> {
 			);
 			if (!added.ok) throw new Error(`demo container ${demo.key}: ${added.message}`);
 		}
+		if ('paymentTerms' in demo && demo.paymentTerms) {
+			const papers = { ...PAPERS, paymentTerms: demo.paymentTerms, version: version++ };
+			const saved = await updatePaperDetails(actor, id, papers, null);
+			if (!saved.ok) throw new Error(`demo papers ${demo.key}: ${saved.message}`);
+		}
 		for (const to of demo.status) {
-			const changed = await changeStatus(actor, id, { to, note: '', version: version++ }, null);
+			// The papers are issued for real (numbered PDFs), which moves the shipment on.
+			const changed =
+				to === 'documents_issued'
+					? await issuePapers(
+							actor,
+							id,
+							{ kinds: ['commercial_invoice', 'packing_list'], reason: '' },
+							null
+						)
+					: await changeStatus(actor, id, { to, note: '', version }, null);
+			version++;
 			if (!changed.ok) throw new Error(`demo status ${demo.key}: ${changed.message}`);
 		}
 	}

@@ -11,6 +11,7 @@ import type { SessionUser } from '$lib/server/auth/session-user';
 import {
 	AuditEvent,
 	ContainerTypeRow,
+	Party,
 	Place,
 	Product,
 	Shipment,
@@ -26,8 +27,10 @@ import {
 	changeStatus,
 	createShipment,
 	replaceLines,
+	updatePaperDetails,
 	updateShipment
 } from '$lib/server/services/shipments';
+import { issuePapers } from '$lib/server/services/documents/issue';
 import type { ServiceResult } from '$lib/server/services/users';
 import {
 	containerSchema,
@@ -51,6 +54,7 @@ const org = { exporter: '', hallvik: '', wattlebird: '', broker: '' };
 const place: Record<string, string> = {};
 const product: Record<string, { id: string; unitPrice: string }> = {};
 let containerTypeId = '';
+let hallvikConsignee = '';
 
 const createdShipments = new Set<string>();
 
@@ -71,6 +75,11 @@ beforeAll(async () => {
 	const containerType = await ContainerTypeRow.findOne({ order: [['code', 'ASC']] });
 	if (!containerType) throw new Error('No container types: is the database seeded?');
 	containerTypeId = containerType.id;
+	const consignee = await Party.findOne({
+		where: { name: 'Hallvik Heimtechnik GmbH — Distribution centre' }
+	});
+	if (!consignee) throw new Error('No demo consignee: is the database seeded?');
+	hallvikConsignee = consignee.id;
 });
 
 // Registered after db.ts's own afterAll, so it runs first (vitest runs after-hooks as a stack)
@@ -78,6 +87,10 @@ beforeAll(async () => {
 // (ON DELETE CASCADE); audit events stay, as they would in the app.
 afterAll(async () => {
 	if (createdShipments.size > 0) {
+		// Issued papers are kept on purpose (ON DELETE RESTRICT); a test cleans them up itself.
+		await sequelize.query('DELETE FROM shipment_documents WHERE shipment_id IN (:ids)', {
+			replacements: { ids: [...createdShipments] }
+		});
 		await Shipment.destroy({ where: { id: [...createdShipments] } });
 	}
 });
@@ -166,6 +179,21 @@ async function moveTo(id: string, to: ShipmentStatus, actor = coordinator, note 
 		statusChangeSchema.parse({ to, note, version: await versionOf(id) }),
 		IP
 	);
+}
+
+/** Issues both papers, as the papers panel does: the details they print first. */
+async function issueBoth(id: string) {
+	const details = {
+		paymentTerms: '30 days net',
+		exportReason: 'Sale',
+		signatoryName: 'Test Signatory',
+		signatoryTitle: 'Export coordinator',
+		signingPlace: 'Penang',
+		version: await versionOf(id)
+	};
+	ok(await updatePaperDetails(coordinator, id, details, IP), 'paper details');
+	const kinds = ['commercial_invoice', 'packing_list'] as const;
+	return ok(await issuePapers(coordinator, id, { kinds: [...kinds], reason: '' }, IP), 'issue');
 }
 
 async function storedLines(id: string) {
@@ -477,13 +505,15 @@ describe('changeStatus', () => {
 	});
 
 	it('moves draft → booked → documents_issued, each step a status event with the actor', async () => {
-		const { id } = await create();
+		const { id } = await create({ consigneeId: hallvikConsignee });
 		ok(await setLines(id, [{ sku: 'SLV-PBL-20', quantity: 24 }]), 'replaceLines');
 		expect(ok(await moveTo(id, 'booked', coordinator, 'Space confirmed'), 'book')).toEqual({
 			id,
 			status: 'booked'
 		});
-		ok(await moveTo(id, 'documents_issued'), 'issue documents');
+		// Straight to "documents issued" is refused until the papers exist.
+		expect(refused(await moveTo(id, 'documents_issued')).message).toMatch(/Issue the commercial/);
+		await issueBoth(id);
 		expect(await statusOf(id)).toBe('documents_issued');
 		const events = await statusEvents(id);
 		expect(events.map((e) => [e.fromStatus, e.toStatus, e.actorUserId])).toEqual([
@@ -492,12 +522,12 @@ describe('changeStatus', () => {
 			['booked', 'documents_issued', coordinator.id]
 		]);
 		expect(events[1]!.note).toBe('Space confirmed');
-		expect(events[2]!.note).toBeNull();
+		expect(events[2]!.note).toMatch(/^Issued CI-\d{4}-\d{5} rev\. A, PL-\d{4}-\d{5} rev\. A$/);
 		const audit = (await auditEvents(id)).filter((a) => a.action === 'shipment.status');
 		expect(audit.map((a) => [a.before, a.after])).toEqual([
-			[{ status: 'draft' }, { status: 'booked', note: 'Space confirmed' }],
-			[{ status: 'booked' }, { status: 'documents_issued', note: '' }]
+			[{ status: 'draft' }, { status: 'booked', note: 'Space confirmed' }]
 		]);
+		expect((await auditEvents(id)).map((a) => a.action)).toContain('documents.issue');
 		// The detail page shows the history with the actor's name.
 		const detail = await getShipment(coordinator, id);
 		expect(detail!.statusEvents.map((e) => [e.toStatus, e.actorName])).toEqual([
@@ -536,11 +566,11 @@ describe('changeStatus', () => {
 	});
 
 	it('freezes the lines once the documents are issued, until it goes back to booked', async () => {
-		const { id } = await create();
+		const { id } = await create({ consigneeId: hallvikConsignee });
 		ok(await setLines(id, [{ sku: 'SLV-PBL-20', quantity: 24 }]), 'replaceLines');
 		ok(await moveTo(id, 'booked'), 'book');
 		ok(await setLines(id, [{ sku: 'SLV-PBL-20', quantity: 36 }]), 'replaceLines while booked');
-		ok(await moveTo(id, 'documents_issued'), 'issue documents');
+		await issueBoth(id);
 		const before = await storedLines(id);
 		const version = await versionOf(id);
 

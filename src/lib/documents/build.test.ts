@@ -120,3 +120,20 @@ describe('readiness', () => {
 		expect(noFreight('CIP')).toEqual(['freightAmount', 'insuranceAmount']);
 	});
 });
+
+describe('documentContent', () => {
+	it('ignores the stamp and notices a changed figure', async () => {
+		const { documentContent } = await import('./content');
+		const a = buildInvoice(sampleSource(), stamp);
+		const b = buildInvoice(sampleSource(), {
+			number: 'CI-2026-00002',
+			revision: 'B',
+			revisionReason: 'Seal number corrected',
+			issuedOn: '2026-12-24'
+		});
+		expect(documentContent(a)).toBe(documentContent(b));
+		const src = sampleSource();
+		src.lines = [{ ...src.lines[0]!, unitPrice: '48.3400' }, src.lines[1]!];
+		expect(documentContent(buildInvoice(src, stamp))).not.toBe(documentContent(a));
+	});
+});

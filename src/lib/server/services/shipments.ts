@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
+import type { PaperDetailsInput } from '../../schemas/documents';
 import type { ShipmentInput, ShipmentLinesInput } from '../../schemas/shipments';
 import { canTransition, type ShipmentStatus } from '../../trade/shipment-status';
 import type { SessionUser } from '../auth/session-user';
@@ -16,6 +17,7 @@ import {
 	ShipmentStatusEvent
 } from '../db/models';
 import { recordAudit } from './audit';
+import { papersOutOfDate } from './documents/issue';
 import { canEditShipments, shipmentScopeWhere } from './shipment-scope';
 import { refused as refusal, type Refusal, type ServiceResult } from './result';
 
@@ -226,6 +228,53 @@ export async function updateShipment(
 	});
 }
 
+function paperFields(input: PaperDetailsInput) {
+	const orNull = (v: string | undefined) => (v === undefined || v === '' ? null : v);
+	return {
+		paymentTerms: orNull(input.paymentTerms),
+		exportReason: orNull(input.exportReason),
+		freightAmount: input.freightAmount ? new Decimal(input.freightAmount).toFixed(4) : null,
+		insuranceAmount: input.insuranceAmount ? new Decimal(input.insuranceAmount).toFixed(4) : null,
+		marks: orNull(input.marks),
+		signatoryName: orNull(input.signatoryName),
+		signatoryTitle: orNull(input.signatoryTitle),
+		signingPlace: orNull(input.signingPlace)
+	};
+}
+
+/** The fields only the customs papers print (payment terms, charges, marks, signatory). */
+export async function updatePaperDetails(
+	actor: SessionUser,
+	id: string,
+	input: PaperDetailsInput,
+	ip: string | null
+) {
+	return run(async (transaction) => {
+		const shipment = await lockShipment(actor, id, transaction);
+		requireEditable(shipment);
+		await bumpVersion(transaction, id, input.version);
+		const after = paperFields(input);
+		const plain = shipment.get({ plain: true });
+		const before = Object.fromEntries(
+			Object.keys(after).map((k) => [k, plain[k as keyof typeof plain] ?? null])
+		);
+		await Shipment.update(after, { where: { id }, transaction, silent: true });
+		await recordAudit(
+			{
+				actorUserId: actor.id,
+				action: 'shipment.papers',
+				entity: 'shipment',
+				entityId: id,
+				before,
+				after,
+				ip
+			},
+			transaction
+		);
+		return { id };
+	});
+}
+
 export async function replaceLines(
 	actor: SessionUser,
 	id: string,
@@ -282,6 +331,11 @@ export async function changeStatus(
 	input: { to: ShipmentStatus; note: string; version: number },
 	ip: string | null
 ) {
+	if (input.to === 'documents_issued' && canEditShipments(actor)) {
+		// The status says the papers are out: they must exist and match the shipment as it is.
+		const problem = await papersOutOfDate(actor, id);
+		if (problem) return refusal(409, problem, { to: problem });
+	}
 	return run(async (transaction) => {
 		const shipment = await lockShipment(actor, id, transaction);
 		if (!canTransition(shipment.status, input.to)) {

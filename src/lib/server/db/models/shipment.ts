@@ -43,6 +43,15 @@ export class Shipment extends Model<InferAttributes<Shipment>, InferCreationAttr
 	declare etd: string | null;
 	declare eta: string | null;
 	declare notes: string | null;
+	// What only the customs papers print (migration 011); null until the coordinator sets it.
+	declare paymentTerms: CreationOptional<string | null>;
+	declare exportReason: CreationOptional<string | null>;
+	declare freightAmount: CreationOptional<string | null>;
+	declare insuranceAmount: CreationOptional<string | null>;
+	declare marks: CreationOptional<string | null>;
+	declare signatoryName: CreationOptional<string | null>;
+	declare signatoryTitle: CreationOptional<string | null>;
+	declare signingPlace: CreationOptional<string | null>;
 	declare version: CreationOptional<number>;
 	declare createdBy: string | null;
 	declare createdAt: CreationOptional<Date>;
@@ -124,6 +133,14 @@ export function initShipmentModels(sequelize: Sequelize): void {
 			etd: { type: DataTypes.DATEONLY, allowNull: true },
 			eta: { type: DataTypes.DATEONLY, allowNull: true },
 			notes: optionalText(),
+			paymentTerms: optionalText(),
+			exportReason: optionalText(),
+			freightAmount: { type: DataTypes.DECIMAL(14, 4), allowNull: true },
+			insuranceAmount: { type: DataTypes.DECIMAL(14, 4), allowNull: true },
+			marks: optionalText(),
+			signatoryName: optionalText(),
+			signatoryTitle: optionalText(),
+			signingPlace: optionalText(),
 			version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
 			createdBy: uuid(true),
 			...timestamps()

@@ -4,6 +4,8 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import { issuePapers } from '$lib/server/services/documents/issue';
+import { documentRegister } from '$lib/server/services/documents/register';
 import { cachedLoadPlan } from '$lib/server/services/load-plan';
 import { addLot, addLots, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
@@ -15,8 +17,10 @@ import {
 	changeStatus,
 	removeContainer,
 	replaceLines,
+	updatePaperDetails,
 	updateShipment
 } from '$lib/server/services/shipments';
+import { issuePapersSchema, paperDetailsSchema } from '$lib/schemas/documents';
 import {
 	containerSchema,
 	lotImportSchema,
@@ -25,6 +29,7 @@ import {
 	shipmentSchema,
 	statusChangeSchema
 } from '$lib/schemas/shipments';
+import { DOCUMENT_KINDS } from '$lib/documents/types';
 import { isStaff } from '$lib/roles';
 import { allowedTransitions } from '$lib/trade/shipment-status';
 import type { Actions, PageServerLoad } from './$types';
@@ -72,25 +77,56 @@ export const load: PageServerLoad = async (event) => {
 		quantity: l.quantity,
 		unitPrice: l.unitPrice
 	}));
-	const [headerForm, linesForm, containerForm, lotForm, lotImportForm, lots, loadPlan] =
-		await Promise.all([
-			superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
-			superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
-				errors: false,
-				id: 'lines'
-			}),
-			superValidate({ version: shipment.version }, zod4(containerSchema), {
-				errors: false,
-				id: 'container'
-			}),
-			superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
-			superValidate({ lots: [], version: shipment.version }, zod4(lotImportSchema), {
-				errors: false,
-				id: 'lot-import'
-			}),
-			listLots(shipment.id),
-			cachedLoadPlan(user, shipment.id)
-		]);
+	const paperDetails = {
+		paymentTerms: shipment.paymentTerms ?? '',
+		exportReason: shipment.exportReason ?? '',
+		freightAmount: shipment.freightAmount ?? '',
+		insuranceAmount: shipment.insuranceAmount ?? '',
+		marks: shipment.marks ?? '',
+		signatoryName: shipment.signatoryName ?? '',
+		signatoryTitle: shipment.signatoryTitle ?? '',
+		signingPlace: shipment.signingPlace ?? '',
+		version: shipment.version
+	};
+	const [
+		headerForm,
+		linesForm,
+		containerForm,
+		lotForm,
+		lotImportForm,
+		lots,
+		loadPlan,
+		papers,
+		paperForm,
+		issueForm
+	] = await Promise.all([
+		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
+		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
+			errors: false,
+			id: 'lines'
+		}),
+		superValidate({ version: shipment.version }, zod4(containerSchema), {
+			errors: false,
+			id: 'container'
+		}),
+		superValidate({ version: shipment.version }, zod4(lotSchema), { errors: false, id: 'lot' }),
+		superValidate({ lots: [], version: shipment.version }, zod4(lotImportSchema), {
+			errors: false,
+			id: 'lot-import'
+		}),
+		listLots(shipment.id),
+		cachedLoadPlan(user, shipment.id),
+		documentRegister(user, shipment.id),
+		superValidate(paperDetails, zod4(paperDetailsSchema), { errors: false, id: 'papers' }),
+		superValidate({ kinds: [], reason: '' }, zod4(issuePapersSchema), {
+			errors: false,
+			id: 'issue'
+		})
+	]);
+	// Offer the papers not yet issued; a reissue is chosen on purpose.
+	issueForm.data.kinds = DOCUMENT_KINDS.filter(
+		(k) => !papers?.papers.some((p) => p.kind === k && p.current)
+	);
 	return {
 		shipment,
 		measure: result,
@@ -105,7 +141,10 @@ export const load: PageServerLoad = async (event) => {
 		lotImportForm,
 		lots,
 		loadPlan,
-		canPlanLoad: isStaff(user.role)
+		canPlanLoad: isStaff(user.role),
+		papers,
+		paperForm,
+		issueForm
 	};
 };
 
@@ -124,6 +163,38 @@ export const actions: Actions = {
 		);
 		if (!result.ok) return refuse(form, result);
 		return message(form, { tone: 'ok', text: 'Shipment saved.' });
+	},
+	papers: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(paperDetailsSchema), { id: 'papers' });
+		if (!form.valid) return fail(400, { form });
+		const result = await updatePaperDetails(
+			user,
+			event.params.shipmentId,
+			form.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: 'Details for the papers saved.' });
+	},
+	issuePapers: async (event) => {
+		const user = editor(event);
+		const form = await superValidate(event.request, zod4(issuePapersSchema), { id: 'issue' });
+		if (!form.valid) return fail(400, { form });
+		const result = await issuePapers(
+			user,
+			event.params.shipmentId,
+			form.data,
+			event.getClientAddress()
+		);
+		if (!result.ok) {
+			// Readiness items are listed by the panel itself; only the reason is a field here.
+			const reason = result.fieldErrors.reason;
+			return refuse(form, { ...result, fieldErrors: reason ? { reason } : {} });
+		}
+		const issued = result.value.papers.map((p) => `${p.number} rev. ${p.revision}`).join(', ');
+		form.data.reason = '';
+		return message(form, { tone: 'ok', text: `Issued ${issued}.` });
 	},
 	lines: async (event) => {
 		const user = editor(event);
