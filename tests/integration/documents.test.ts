@@ -22,6 +22,7 @@ import {
 	replaceLines,
 	updatePaperDetails
 } from '$lib/server/services/shipments';
+import { paperDetailsSchema } from '$lib/schemas/documents';
 import { shipmentSchema } from '$lib/schemas/shipments';
 import { formatHsCode } from '$lib/trade/hs-code';
 import { demoOrganization, sequelize, sessionUserFor } from './db';
@@ -105,7 +106,7 @@ async function bookedShipment(
 			signingPlace: 'Penang',
 			version: await version(id)
 		};
-		ok(await updatePaperDetails(coordinator, id, details, IP), 'details');
+		ok(await updatePaperDetails(coordinator, id, paperDetailsSchema.parse(details), IP), 'details');
 	}
 	const to = { to: 'booked' as const, note: '', version: await version(id) };
 	ok(await changeStatus(coordinator, id, to, IP), 'book');

@@ -32,6 +32,7 @@ import {
 } from '$lib/server/services/shipments';
 import { issuePapers } from '$lib/server/services/documents/issue';
 import type { ServiceResult } from '$lib/server/services/users';
+import { paperDetailsSchema } from '$lib/schemas/documents';
 import {
 	containerSchema,
 	shipmentLinesSchema,
@@ -191,7 +192,10 @@ async function issueBoth(id: string) {
 		signingPlace: 'Penang',
 		version: await versionOf(id)
 	};
-	ok(await updatePaperDetails(coordinator, id, details, IP), 'paper details');
+	ok(
+		await updatePaperDetails(coordinator, id, paperDetailsSchema.parse(details), IP),
+		'paper details'
+	);
 	const kinds = ['commercial_invoice', 'packing_list'] as const;
 	return ok(await issuePapers(coordinator, id, { kinds: [...kinds], reason: '' }, IP), 'issue');
 }

@@ -31,8 +31,8 @@ function unitPrice(value: string, minorUnits: number): string {
 function columns(currency: string): Column[] {
 	return [
 		{ title: 'No.', width: 22 },
-		{ title: 'Description of goods', width: CONTENT_WIDTH - 322 },
-		{ title: 'HS code', width: 50 },
+		{ title: 'Description of goods', width: CONTENT_WIDTH - 338 },
+		{ title: 'HS code', width: 66 },
 		{ title: 'Origin', width: 30 },
 		{ title: 'Quantity', width: 42, align: 'right' },
 		{ title: 'Unit', width: 24 },
