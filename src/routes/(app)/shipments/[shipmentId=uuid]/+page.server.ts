@@ -132,7 +132,16 @@ export const load: PageServerLoad = async (event) => {
 		measure: result,
 		canEdit,
 		editable,
-		transitions: canEdit ? allowedTransitions(shipment.status) : [],
+		// "Documents issued" comes from the papers panel; offered here only when the papers stand.
+		transitions: canEdit
+			? allowedTransitions(shipment.status).filter(
+					(to) =>
+						to !== 'documents_issued' ||
+						DOCUMENT_KINDS.every((k) =>
+							papers?.papers.some((p) => p.kind === k && p.current && p.upToDate)
+						)
+				)
+			: [],
 		options: options && { ...options, currencies: countryAndCurrencyOptions().currencies },
 		headerForm,
 		linesForm,
