@@ -35,7 +35,8 @@ interface Probe {
 	method: 'GET' | 'POST' | 'PATCH' | 'PUT';
 	/**
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
-	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :place,
+	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :cedar
+	 * (Cedarpoint's, papers issued, no broker) and :cedarDoc (its first paper); :place,
 	 * :party, :pallet and :container (the first listed).
 	 */
 	path: string;
@@ -239,7 +240,34 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/shipments/:ship?/removeLot',
 				form: { lotId: 'x' },
 				expect: EDITOR_ACTION
+			},
+			// No version in the form: stale (409) for the editors, like the lines.
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/papers',
+				form: { x: '' },
+				expect: { anonymous: 303, admin: 409, coordinator: 409, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/issuePapers',
+				form: { x: '' },
+				expect: EDITOR_ACTION
 			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/papers/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/shipments/:cedar/papers/:cedarDoc',
+				expect: OTHER_SHIPMENT_PAGE
+			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/papers/current.zip': {
+		api: [
+			{ method: 'GET', path: '/shipments/:cedar/papers/current.zip', expect: OTHER_SHIPMENT_PAGE }
 		]
 	},
 	'/api/health': { api: [{ method: 'GET', path: '/api/health', expect: { default: 200 } }] },
@@ -323,6 +351,27 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			{ method: 'GET', path: '/api/v1/shipments/:otherShip/measure', expect: OTHER_SHIPMENT_API }
 		]
 	},
+	'/api/v1/shipments/[shipmentId=uuid]/documents': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:ship/documents', expect: API_200 },
+			{ method: 'GET', path: '/api/v1/shipments/:otherShip/documents', expect: OTHER_SHIPMENT_API },
+			{ method: 'POST', path: '/api/v1/shipments/:ship/documents', body: {}, expect: EDITOR_API }
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/documents/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:cedar/documents/:cedarDoc',
+				expect: OTHER_SHIPMENT_API
+			}
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/documents.zip': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:cedar/documents.zip', expect: OTHER_SHIPMENT_API }
+		]
+	},
 	'/api/v1/shipments/[shipmentId=uuid]/load-plan': {
 		api: [
 			{ method: 'GET', path: '/api/v1/shipments/:ship/load-plan', expect: API_200 },
@@ -392,7 +441,9 @@ test.describe('access per role', () => {
 		pallet: '',
 		container: '',
 		ship: '',
-		otherShip: ''
+		otherShip: '',
+		cedar: '',
+		cedarDoc: ''
 	};
 
 	test.beforeAll(async ({ baseURL }) => {
@@ -428,6 +479,12 @@ test.describe('access per role', () => {
 		).json()) as { rows: { id: string; customerName: string }[] };
 		ids.ship = brokerList.rows.find((r) => r.customerName.startsWith('Hallvik'))!.id;
 		ids.otherShip = rows.find((r) => r.customerName.startsWith('Wattlebird'))!.id;
+		// Cedarpoint's seeded shipment has its papers issued and no broker.
+		ids.cedar = rows.find((r) => r.customerName.startsWith('Cedarpoint'))!.id;
+		const register = (await (
+			await admin.get(`/api/v1/shipments/${ids.cedar}/documents`)
+		).json()) as { papers: { id: string }[] };
+		ids.cedarDoc = register.papers[0]!.id;
 		const productsPage = await admin.get('/products');
 		ids.product = /\/products\/([0-9a-f-]{36})/.exec(await productsPage.text())![1]!;
 		const firstId = async (page: string, link: string) =>
@@ -455,6 +512,8 @@ test.describe('access per role', () => {
 			for (const probe of probes) {
 				const url = probe.path
 					.replace(':otherShip', ids.otherShip)
+					.replace(':cedarDoc', ids.cedarDoc)
+					.replace(':cedar', ids.cedar)
 					.replace(':ship', ids.ship)
 					.replace(':own', ids.own.get(who)!)
 					.replace(':other', ids.other)

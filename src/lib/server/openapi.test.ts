@@ -11,6 +11,9 @@ describe('OpenAPI document', () => {
 				'/shipments',
 				'/shipments/{shipmentId}',
 				'/shipments/{shipmentId}/measure',
+				'/shipments/{shipmentId}/documents',
+				'/shipments/{shipmentId}/documents/{documentId}',
+				'/shipments/{shipmentId}/documents.zip',
 				'/calc/measure'
 			])
 		);

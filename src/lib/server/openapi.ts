@@ -7,6 +7,7 @@ import {
 	loadPlanInputSchema,
 	loadPlanSchema
 } from '../schemas/load-plan';
+import { issuePapersSchema } from '../schemas/documents';
 import { productSchema } from '../schemas/products';
 import { shipmentLinesSchema, shipmentListQuerySchema, shipmentSchema } from '../schemas/shipments';
 
@@ -42,7 +43,7 @@ export function openApiDocument(origin: string) {
 			title: 'Landfall API',
 			version: '1',
 			description:
-				'Shipments, products and packing measures. Authenticate with the session cookie of a signed-in user. Customers see only their organization’s rows.'
+				'Shipments, products, packing measures, load plans and customs papers. Authenticate with the session cookie of a signed-in user. Customers see only their organization’s rows.'
 		},
 		servers: [{ url: `${origin}/api/v1` }],
 		paths: {
@@ -96,6 +97,47 @@ export function openApiDocument(origin: string) {
 						200: ok('Load plan with the items and container types'),
 						...errors,
 						503: error
+					}
+				}
+			},
+			'/shipments/{shipmentId}/documents': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Document register: every issued paper and revision',
+					description:
+						'Commercial invoices and packing lists with number, revision (A, B…), reason, issue time, SHA-256 of the PDF, pages and whether each is current or superseded. Staff also see who issued, download counts and `upToDate` (false when the shipment changed since the issue) and `readiness` (what blocks issuing). Customers and brokers see the papers of the shipments they may see.',
+					responses: { 200: ok('The register'), ...errors }
+				},
+				post: {
+					summary: 'Issue papers (coordinators, administrators)',
+					description:
+						'Issues each paper in `kinds` not yet issued (revision A, a new gap-free number per exporter, kind and year) and reissues those already issued as the next revision of the same number, which needs a `reason`. All or nothing. 400 with `issues` naming each missing item (e.g. `paymentTerms`, `products.SKU.hsCode`) when the shipment is not ready. A booked shipment moves to documents issued.',
+					requestBody: body('IssuePapers'),
+					responses: {
+						201: ok('The papers issued: id, kind, number, revision, sha256, pages'),
+						...errors
+					}
+				}
+			},
+			'/shipments/{shipmentId}/documents/{documentId}': {
+				parameters: [idParam('shipmentId'), idParam('documentId')],
+				get: {
+					summary: 'Download one paper (any revision) as PDF',
+					description:
+						'Headers `x-landfall-sha256`, `x-landfall-revision` and `x-landfall-superseded` describe the file. Every download is logged with the user and time.',
+					responses: {
+						200: { description: 'The PDF', content: { 'application/pdf': {} } },
+						...errors
+					}
+				}
+			},
+			'/shipments/{shipmentId}/documents.zip': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Download the current papers as one ZIP, with a SHA256SUMS file',
+					responses: {
+						200: { description: 'The ZIP', content: { 'application/zip': {} } },
+						...errors
 					}
 				}
 			},
@@ -155,6 +197,7 @@ export function openApiDocument(origin: string) {
 				LoadPlanInput: schema(loadPlanInputSchema),
 				LoadPlan: schema(loadPlanSchema),
 				Product: schema(productSchema),
+				IssuePapers: schema(issuePapersSchema),
 				CreateUser: schema(createUserSchema),
 				UpdateUser: schema(updateUserSchema)
 			}
