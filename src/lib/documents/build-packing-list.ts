@@ -18,6 +18,11 @@ export const PACKING_LIST_CAUTIONS: readonly string[] = Object.freeze([
 		'applicable dangerous-goods regulations allow; trained staff prepare and mark them.'
 ]);
 
+export const LOAD_PLAN_CAUTION =
+	'The load-plan pictures are a computed proposal. How the container is actually stowed, ' +
+	'braced and weight-distributed is for the carrier, the IMO/ILO/UNECE CTU Code and trained ' +
+	'staff to decide.';
+
 const kg = (d: Decimal) => d.toFixed(3, Decimal.ROUND_HALF_UP);
 const m3 = (d: Decimal) => d.toFixed(3, Decimal.ROUND_HALF_UP);
 
@@ -100,7 +105,10 @@ export function buildPackingList(source: DocumentSource, stamp: IssueStamp): Pac
 	}
 	const p = m.pallets;
 	return {
-		...buildHeader('packing_list', source, stamp, m.totals.cartons, [...PACKING_LIST_CAUTIONS]),
+		...buildHeader('packing_list', source, stamp, m.totals.cartons, [
+			...PACKING_LIST_CAUTIONS,
+			...(source.loadPlan ? [LOAD_PLAN_CAUTION] : [])
+		]),
 		kind: 'packing_list',
 		rows,
 		totals: {
