@@ -5,7 +5,7 @@
  * Pure module: no framework imports.
  */
 import type Decimal from 'decimal.js';
-import { ZERO, boxM3, exact, kgOut, m3Out } from './exact';
+import { boxM3, exact, kgOut, m3Out } from './exact';
 import {
 	MESSAGES,
 	checkMillimetres,
@@ -15,6 +15,15 @@ import {
 	prefixProblems,
 	type Problem
 } from './problem';
+import {
+	mgOfKg,
+	wholeFixed,
+	wholeMinus,
+	wholePlus,
+	wholeProductOf,
+	wholeTimes,
+	type Whole
+} from './whole-units';
 
 export const ORIENTATIONS = ['any', 'this_way_up'] as const;
 /** 'this_way_up': the carton's height stays vertical. 'any': it may stand on any face. */
@@ -97,33 +106,21 @@ export function countCartons(
 	return { fullCartons, remainderUnits, cartons: fullCartons + (remainderUnits > 0 ? 1 : 0) };
 }
 
-/** Exact masses of one line's cartons (kg). */
+/** Exact masses of one line's cartons, in whole milligrams (see whole-units.ts). */
 export interface CartonMasses {
-	netPerUnit: Decimal;
-	tare: Decimal;
-	fullGross: Decimal;
+	netPerUnitMg: Whole;
+	tareMg: Whole;
+	fullGrossMg: Whole;
 	/** Gross of the remainder carton, or null when there is none. */
-	remainderGross: Decimal | null;
-	net: Decimal;
-	gross: Decimal;
+	remainderGrossMg: Whole | null;
+	netMg: Whole;
+	grossMg: Whole;
 }
 
 /** The exact masses for a line whose input is valid (see `checkCartonLine`). */
 export function cartonMasses(input: CartonLineInput): CartonMasses {
-	const { quantity, packaging } = input;
-	const netPerUnit = exact(input.netKgPerUnit);
-	const fullGross = exact(packaging.cartonGrossKg);
-	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
-	const { cartons, remainderUnits } = countCartons(quantity, packaging.unitsPerCarton);
-	const net = netPerUnit.times(quantity);
-	return {
-		netPerUnit,
-		tare,
-		fullGross,
-		remainderGross: remainderUnits > 0 ? tare.plus(netPerUnit.times(remainderUnits)) : null,
-		net,
-		gross: tare.times(cartons).plus(net)
-	};
+	return packProductCartons(cartonProduct(input.netKgPerUnit, input.packaging), input.quantity, 1)
+		.masses;
 }
 
 /** Problems with the packaging alone (paths relative to the packaging). */
@@ -191,6 +188,11 @@ export interface CartonProduct {
 	fullGross: Decimal;
 	tare: Decimal;
 	cartonM3: Decimal;
+	/** The same figures in whole milligrams and mm³, for the per-line arithmetic. */
+	netPerUnitMg: Whole;
+	fullGrossMg: Whole;
+	tareMg: Whole;
+	cartonMm3: Whole;
 	carton: CartonLine['carton'];
 	fullNetKg: string;
 	/** The full carton's gross, every decimal kept (for chargeable-weight pieces). */
@@ -202,12 +204,18 @@ export function cartonProduct(netKgPerUnit: string, packaging: Packaging): Carto
 	const fullGross = exact(packaging.cartonGrossKg);
 	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
 	const cartonM3 = boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm);
+	const netPerUnitMg = mgOfKg(netKgPerUnit);
+	const fullGrossMg = mgOfKg(packaging.cartonGrossKg);
 	return {
 		packaging,
 		netPerUnit,
 		fullGross,
 		tare,
 		cartonM3,
+		netPerUnitMg,
+		fullGrossMg,
+		tareMg: wholeMinus(fullGrossMg, wholeTimes(netPerUnitMg, packaging.unitsPerCarton)),
+		cartonMm3: wholeProductOf(packaging.lengthMm, packaging.widthMm, packaging.heightMm),
 		carton: {
 			lengthMm: packaging.lengthMm,
 			widthMm: packaging.widthMm,
@@ -221,7 +229,15 @@ export function cartonProduct(netKgPerUnit: string, packaging: Packaging): Carto
 	};
 }
 
-/** One valid line's cartons and exact masses, from its product's shared figures. */
+/** Kilograms to 3 decimals from whole milligrams (as `kgOut`). */
+function kgOfMg(mg: Whole): string {
+	return wholeFixed(mg, 6, 3);
+}
+
+/**
+ * One valid line's cartons and exact masses, from its product's shared figures. Called once per
+ * line, so it works in whole milligrams and mm³ rather than decimal.js (see whole-units.ts).
+ */
 export function packProductCartons(
 	product: CartonProduct,
 	quantity: number,
@@ -229,17 +245,17 @@ export function packProductCartons(
 ): { line: CartonLine; masses: CartonMasses } {
 	const upc = product.packaging.unitsPerCarton;
 	const count = countCartons(quantity, upc);
-	const { netPerUnit, tare, fullGross } = product;
-	const net = netPerUnit.times(quantity);
-	const remainderGross =
-		count.remainderUnits > 0 ? tare.plus(netPerUnit.times(count.remainderUnits)) : null;
+	const { netPerUnitMg, tareMg, fullGrossMg } = product;
+	const netMg = wholeTimes(netPerUnitMg, quantity);
+	const remainderNetMg = wholeTimes(netPerUnitMg, count.remainderUnits);
+	const remainderGrossMg = count.remainderUnits > 0 ? wholePlus(tareMg, remainderNetMg) : null;
 	const masses: CartonMasses = {
-		netPerUnit,
-		tare,
-		fullGross,
-		remainderGross,
-		net,
-		gross: tare.times(count.cartons).plus(net)
+		netPerUnitMg,
+		tareMg,
+		fullGrossMg,
+		remainderGrossMg,
+		netMg,
+		grossMg: wholePlus(wholeTimes(tareMg, count.cartons), netMg)
 	};
 	const lastCarton = firstCarton + count.cartons - 1;
 	const groups: CartonGroup[] = [];
@@ -253,14 +269,14 @@ export function packProductCartons(
 			grossKgPerCarton: product.carton.fullGrossKg
 		});
 	}
-	if (remainderGross !== null) {
+	if (remainderGrossMg !== null) {
 		groups.push({
 			fromCarton: lastCarton,
 			toCarton: lastCarton,
 			cartons: 1,
 			unitsPerCarton: count.remainderUnits,
-			netKgPerCarton: kgOut(netPerUnit.times(count.remainderUnits)),
-			grossKgPerCarton: kgOut(remainderGross)
+			netKgPerCarton: kgOfMg(remainderNetMg),
+			grossKgPerCarton: kgOfMg(remainderGrossMg)
 		});
 	}
 	return {
@@ -272,9 +288,9 @@ export function packProductCartons(
 			lastCarton,
 			groups,
 			carton: product.carton,
-			netKg: kgOut(net),
-			grossKg: kgOut(masses.gross),
-			volumeM3: m3Out(product.cartonM3.times(count.cartons))
+			netKg: kgOfMg(netMg),
+			grossKg: kgOfMg(masses.grossMg),
+			volumeM3: wholeFixed(wholeTimes(product.cartonMm3, count.cartons), 9, 6)
 		},
 		masses
 	};
@@ -305,9 +321,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 	const lines: CartonLine[] = [];
 	let next = 1;
 	let units = 0;
-	let net = ZERO;
-	let gross = ZERO;
-	let volume = ZERO;
+	let net: Whole = 0;
+	let gross: Whole = 0;
+	let volume: Whole = 0;
 	for (const input of inputs) {
 		// Inputs were checked above: pack and weigh each line once.
 		const product = cartonProduct(input.netKgPerUnit, input.packaging);
@@ -315,9 +331,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 		lines.push(line);
 		next = line.lastCarton + 1;
 		units += input.quantity;
-		net = net.plus(masses.net);
-		gross = gross.plus(masses.gross);
-		volume = volume.plus(product.cartonM3.times(line.cartons));
+		net = wholePlus(net, masses.netMg);
+		gross = wholePlus(gross, masses.grossMg);
+		volume = wholePlus(volume, wholeTimes(product.cartonMm3, line.cartons));
 	}
 	return {
 		ok: true,
@@ -325,9 +341,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 		totals: {
 			units,
 			cartons: next - 1,
-			netKg: kgOut(net),
-			grossKg: kgOut(gross),
-			volumeM3: m3Out(volume)
+			netKg: kgOfMg(net),
+			grossKg: kgOfMg(gross),
+			volumeM3: wholeFixed(volume, 9, 6)
 		}
 	};
 }

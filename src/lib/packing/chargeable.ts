@@ -15,8 +15,10 @@ import {
 	m3Out,
 	maxOf,
 	show,
-	wholeProduct
+	wholeProduct,
+	Exact
 } from './exact';
+import { showWhole, wholePlus, wholeProductOf, wholeTimes, type Whole } from './whole-units';
 
 export const CHARGE_MODES = ['air', 'courier', 'sea_lcl', 'road', 'sea_fcl'] as const;
 export type ChargeMode = (typeof CHARGE_MODES)[number];
@@ -190,6 +192,11 @@ export function mmToNearestCm(mm: number): number {
 }
 
 function cm(mm: number): string {
+	// Whole millimetres are tenths of a centimetre: the digits, no division (as show(mm ÷ 10, 1)).
+	if (Number.isSafeInteger(mm) && mm >= 0) {
+		const tenths = mm % 10;
+		return group(String((mm - tenths) / 10)) + (tenths === 0 ? '' : `.${tenths}`);
+	}
 	return show(exact(mm).dividedBy(10), 1);
 }
 
@@ -223,23 +230,24 @@ function roundedCm3(piece: ChargeablePiece) {
 	const l = mmToNearestCm(piece.lengthMm);
 	const w = mmToNearestCm(piece.widthMm);
 	const h = mmToNearestCm(piece.heightMm);
-	return { l, w, h, each: wholeProduct(l, w, h) };
+	return { l, w, h, each: wholeProductOf(l, w, h) };
 }
 
 function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 	const cached = volumeCache.get(pieces);
 	if (cached) return cached;
 	const steps: string[] = [];
-	let cm3 = ZERO;
+	// Whole cm³, as JS numbers while safe (see whole-units.ts): one step line per piece or size.
+	let cm3: Whole = 0;
 	const line = (name: string, piece: ChargeablePiece, count: number) => {
 		const { l, w, h, each } = roundedCm3(piece);
-		const all = each.times(count);
-		cm3 = cm3.plus(all);
+		const all = wholeTimes(each, count);
+		cm3 = wholePlus(cm3, all);
 		steps.push(
 			`${name}: ${cm(piece.lengthMm)} × ${cm(piece.widthMm)} × ` +
 				`${cm(piece.heightMm)} cm, to the nearest whole cm ${l} × ${w} × ${h} cm = ` +
-				`${show(each)} cm³` +
-				(count === 1 ? '' : ` each, ${show(all)} cm³ in all`)
+				`${showWhole(each)} cm³` +
+				(count === 1 ? '' : ` each, ${showWhole(all)} cm³ in all`)
 		);
 	};
 	if (pieces.length <= PIECE_DETAIL_LIMIT) {
@@ -264,7 +272,7 @@ function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 			);
 		}
 	}
-	const result = { cm3, steps };
+	const result = { cm3: new Exact(cm3), steps };
 	volumeCache.set(pieces, result);
 	return result;
 }

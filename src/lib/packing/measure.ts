@@ -27,6 +27,7 @@ import { ZERO, exact, kgOut, m3Out } from './exact';
 import { palletStowage, planPalletsOfMasses, type PalletPlan, type PalletSpec } from './pallets';
 import { MESSAGES, isPositiveInt, type Problem } from './problem';
 import { measureInputSchema, type MeasureInput } from './schema';
+import { mgOfKg, wholePlain, wholePlus, wholeToDecimal, type Whole } from './whole-units';
 
 export interface MeasuredLine extends CartonLine {
 	/** Index of the line in the input (0-based). */
@@ -131,24 +132,25 @@ export function measure(input: MeasureInput): MeasureResult {
 		} else {
 			sumsBySku.set(line.sku, { facts, quantity: line.quantity, cartons: c.cartons });
 		}
-		const dims = {
-			lengthMm: packaging.lengthMm,
-			widthMm: packaging.widthMm,
-			heightMm: packaging.heightMm
-		};
+		// Properties spelt out: an object spread here cost V8 microseconds per piece (measured).
+		const { lengthMm, widthMm, heightMm } = packaging;
 		const label = `Line ${lineIndex + 1}`;
 		if (c.fullCartons > 0) {
 			cartonPieces.push({
-				...dims,
+				lengthMm,
+				widthMm,
+				heightMm,
 				grossKg: facts.fullGrossExact,
 				count: c.fullCartons,
 				label: `${label}, ${range('carton', c.firstCarton, c.firstCarton + c.fullCartons - 1)}`
 			});
 		}
-		if (m.remainderGross !== null) {
+		if (m.remainderGrossMg !== null) {
 			cartonPieces.push({
-				...dims,
-				grossKg: m.remainderGross.toFixed(),
+				lengthMm,
+				widthMm,
+				heightMm,
+				grossKg: wholePlain(m.remainderGrossMg, 6),
 				count: 1,
 				label: `${label}, ${range('carton', c.lastCarton, c.lastCarton)} (part-filled)`
 			});
@@ -172,10 +174,10 @@ export function measure(input: MeasureInput): MeasureResult {
 		const palletPieces: ChargeablePiece[] = [];
 		const planned: MeasuredPallets['lines'] = [];
 		let nextPallet = 1;
-		let palletGross = ZERO;
-		let palletVolume = ZERO;
+		let palletGrossMg: Whole = 0;
+		let palletMm3: Whole = 0;
 		const stowageBySku = new Map<string, ReturnType<typeof palletStowage>>();
-		const palletTare = exact(pallet.tareKg);
+		const palletTareMg = mgOfKg(pallet.tareKg);
 		measured.forEach((line, i) => {
 			const packaging = bySku.get(line.sku)?.packaging;
 			const m = masses[i];
@@ -211,22 +213,22 @@ export function measure(input: MeasureInput): MeasureResult {
 				},
 				stowage.stowage,
 				{
-					cartonGross: m.fullGross,
-					lastCartonGross: m.remainderGross ?? m.fullGross,
-					palletTare
+					cartonGrossMg: m.fullGrossMg,
+					lastCartonGrossMg: m.remainderGrossMg ?? m.fullGrossMg,
+					palletTareMg
 				}
 			);
 			planned.push({ lineIndex: line.lineIndex, sku: line.sku, plan: result.plan });
 			nextPallet = result.plan.lastPallet + 1;
-			palletGross = palletGross.plus(result.exact.gross);
-			palletVolume = palletVolume.plus(result.exact.volumeM3);
+			palletGrossMg = wholePlus(palletGrossMg, result.exact.grossMg);
+			palletMm3 = wholePlus(palletMm3, result.exact.volumeMm3);
 			result.exact.groups.forEach((g, k) => {
 				const group = result.plan.groups[k];
 				palletPieces.push({
 					lengthMm: pallet.lengthMm,
 					widthMm: pallet.widthMm,
 					heightMm: g.loadedHeightMm,
-					grossKg: g.grossPerPallet.toFixed(),
+					grossKg: wholePlain(g.grossPerPalletMg, 6),
 					count: g.pallets,
 					label:
 						`Line ${line.lineIndex + 1}, ` +
@@ -236,6 +238,8 @@ export function measure(input: MeasureInput): MeasureResult {
 		});
 		if (problems.length > 0) return { ok: false, problems };
 		const count = nextPallet - 1;
+		const palletGross = wholeToDecimal(palletGrossMg, 6);
+		const palletVolume = wholeToDecimal(palletMm3, 9);
 		pallets = {
 			pallet,
 			lines: planned,

@@ -14,10 +14,9 @@
  *
  * Pure module: no framework imports.
  */
-import type Decimal from 'decimal.js';
 import type { PalletType } from '../reference/equipment';
 import { ORIENTATIONS, type Orientation } from './cartons';
-import { ZERO, boxM3, exact, kgOut, m3Out, show } from './exact';
+import { exact, show } from './exact';
 import { layerPattern, type LayerPattern } from './layer-pattern';
 import {
 	MESSAGES,
@@ -27,6 +26,15 @@ import {
 	isPositiveInt,
 	type Problem
 } from './problem';
+import {
+	mgOfKg,
+	wholeEquals,
+	wholeFixed,
+	wholePlus,
+	wholeProductOf,
+	wholeTimes,
+	type Whole
+} from './whole-units';
 
 export interface PalletSpec {
 	lengthMm: number;
@@ -150,11 +158,11 @@ export interface PalletPlanInput {
 
 export type PalletPlanResult = { ok: true; plan: PalletPlan } | PalletError;
 
-/** Exact figures behind a plan, for callers that go on computing (measure). */
+/** Exact figures behind a plan, for callers that go on computing (measure): mg and mm³. */
 export interface PalletPlanExact {
-	gross: Decimal;
-	volumeM3: Decimal;
-	groups: { pallets: number; loadedHeightMm: number; grossPerPallet: Decimal }[];
+	grossMg: Whole;
+	volumeMm3: Whole;
+	groups: { pallets: number; loadedHeightMm: number; grossPerPalletMg: Whole }[];
 }
 
 function invalid(problems: Problem[]): PalletError {
@@ -339,11 +347,11 @@ export function palletStowage(
 	};
 }
 
-/** The masses a plan multiplies, already exact (kg). */
+/** The masses a plan multiplies, already exact, in whole milligrams (see whole-units.ts). */
 export interface PalletPlanMasses {
-	cartonGross: Decimal;
-	lastCartonGross: Decimal;
-	palletTare: Decimal;
+	cartonGrossMg: Whole;
+	lastCartonGrossMg: Whole;
+	palletTareMg: Whole;
 }
 
 function planExact(
@@ -355,9 +363,10 @@ function planExact(
 	const firstCarton = input.firstCarton ?? 1;
 	const firstPallet = input.firstPallet ?? 1;
 	const perPallet = stowage.cartonsPerPallet;
-	const gross = masses.cartonGross;
-	const lastGross = masses.lastCartonGross;
-	const tare = masses.palletTare;
+	// Once per line: whole milligrams and mm³, not decimal.js (see whole-units.ts).
+	const gross = masses.cartonGrossMg;
+	const lastGross = masses.lastCartonGrossMg;
+	const tare = masses.palletTareMg;
 	const pallets = Math.ceil(cartons / perPallet);
 	const lastCount = cartons - (pallets - 1) * perPallet;
 	const heightFor = (n: number): number =>
@@ -365,7 +374,7 @@ function planExact(
 
 	const groups: PalletGroup[] = [];
 	const exactGroups: PalletPlanExact['groups'] = [];
-	const add = (from: number, count: number, each: number, grossEach: Decimal): void => {
+	const add = (from: number, count: number, each: number, grossEach: Whole): void => {
 		const firstOfGroup = firstCarton + (from - firstPallet) * perPallet;
 		groups.push({
 			fromPallet: from,
@@ -374,30 +383,31 @@ function planExact(
 			cartonsPerPallet: each,
 			layers: Math.ceil(each / stowage.perLayer),
 			loadedHeightMm: heightFor(each),
-			grossKgPerPallet: kgOut(grossEach),
+			grossKgPerPallet: wholeFixed(grossEach, 6, 3),
 			firstCarton: firstOfGroup,
 			lastCarton: firstOfGroup + count * each - 1
 		});
 		exactGroups.push({
 			pallets: count,
 			loadedHeightMm: heightFor(each),
-			grossPerPallet: grossEach
+			grossPerPalletMg: grossEach
 		});
 	};
-	const fullGross = tare.plus(gross.times(perPallet));
-	const lastPalletGross = tare.plus(gross.times(lastCount - 1)).plus(lastGross);
-	if (lastCount === perPallet && lastGross.equals(gross)) {
+	const fullGross = wholePlus(tare, wholeTimes(gross, perPallet));
+	const lastPalletGross = wholePlus(wholePlus(tare, wholeTimes(gross, lastCount - 1)), lastGross);
+	if (lastCount === perPallet && wholeEquals(lastGross, gross)) {
 		add(firstPallet, pallets, perPallet, fullGross);
 	} else {
 		if (pallets > 1) add(firstPallet, pallets - 1, perPallet, fullGross);
 		add(firstPallet + pallets - 1, 1, lastCount, lastPalletGross);
 	}
 
-	let total = ZERO;
-	let volume = ZERO;
+	let total: Whole = 0;
+	let volume: Whole = 0;
 	for (const g of exactGroups) {
-		total = total.plus(g.grossPerPallet.times(g.pallets));
-		volume = volume.plus(boxM3(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm).times(g.pallets));
+		total = wholePlus(total, wholeTimes(g.grossPerPalletMg, g.pallets));
+		const mm3 = wholeProductOf(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm, g.pallets);
+		volume = wholePlus(volume, mm3);
 	}
 	const partPallets = lastCount < perPallet ? 1 : 0;
 	return {
@@ -410,10 +420,10 @@ function planExact(
 			firstPallet,
 			lastPallet: firstPallet + pallets - 1,
 			groups,
-			grossKg: kgOut(total),
-			volumeM3: m3Out(volume)
+			grossKg: wholeFixed(total, 6, 3),
+			volumeM3: wholeFixed(volume, 9, 6)
 		},
-		exact: { gross: total, volumeM3: volume, groups: exactGroups }
+		exact: { grossMg: total, volumeMm3: volume, groups: exactGroups }
 	};
 }
 
@@ -463,9 +473,9 @@ export function planPalletsWithStowage(
 	if (problems.length > 0) return invalid(problems);
 	if (!stowage.ok) return stowage;
 	const masses = {
-		cartonGross: exact(input.carton.grossKg),
-		lastCartonGross: exact(input.lastCartonGrossKg ?? input.carton.grossKg),
-		palletTare: exact(input.pallet.tareKg)
+		cartonGrossMg: mgOfKg(input.carton.grossKg),
+		lastCartonGrossMg: mgOfKg(input.lastCartonGrossKg ?? input.carton.grossKg),
+		palletTareMg: mgOfKg(input.pallet.tareKg)
 	};
 	return { ok: true, ...planExact(input, stowage.stowage, masses) };
 }
