@@ -4,8 +4,6 @@
  *
  * Pure module: no framework imports.
  */
-import type Decimal from 'decimal.js';
-import { boxM3, exact, kgOut, m3Out } from './exact';
 import {
 	MESSAGES,
 	checkMillimetres,
@@ -18,7 +16,9 @@ import {
 import {
 	mgOfKg,
 	wholeFixed,
+	wholeLessThan,
 	wholeMinus,
+	wholePlain,
 	wholePlus,
 	wholeProductOf,
 	wholeTimes,
@@ -150,13 +150,14 @@ export function checkPackaging(packaging: Packaging): Problem[] {
  * the product: "packaging.cartonGrossKg"), or null. Inputs must be well-formed.
  */
 export function tareProblem(netKgPerUnit: string, packaging: Packaging): Problem | null {
-	const units = exact(netKgPerUnit).times(packaging.unitsPerCarton);
-	if (!exact(packaging.cartonGrossKg).lessThan(units)) return null;
+	// Whole milligrams: the schema runs this for every product of every request.
+	const unitsMg = wholeTimes(mgOfKg(netKgPerUnit), packaging.unitsPerCarton);
+	if (!wholeLessThan(mgOfKg(packaging.cartonGrossKg), unitsMg)) return null;
 	return {
 		path: 'packaging.cartonGrossKg',
 		message:
 			`A full carton’s gross (${packaging.cartonGrossKg} kg) must be at least the net mass of ` +
-			`its ${packaging.unitsPerCarton} units (${units.toFixed()} kg).`
+			`its ${packaging.unitsPerCarton} units (${wholePlain(unitsMg, 6)} kg).`
 	};
 }
 
@@ -184,11 +185,7 @@ export function checkCartonLine(input: CartonLineInput): Problem[] {
  */
 export interface CartonProduct {
 	packaging: Packaging;
-	netPerUnit: Decimal;
-	fullGross: Decimal;
-	tare: Decimal;
-	cartonM3: Decimal;
-	/** The same figures in whole milligrams and mm³, for the per-line arithmetic. */
+	/** Whole milligrams and mm³ (see whole-units.ts). */
 	netPerUnitMg: Whole;
 	fullGrossMg: Whole;
 	tareMg: Whole;
@@ -200,32 +197,28 @@ export interface CartonProduct {
 }
 
 export function cartonProduct(netKgPerUnit: string, packaging: Packaging): CartonProduct {
-	const netPerUnit = exact(netKgPerUnit);
-	const fullGross = exact(packaging.cartonGrossKg);
-	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
-	const cartonM3 = boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm);
+	const { lengthMm, widthMm, heightMm } = packaging;
 	const netPerUnitMg = mgOfKg(netKgPerUnit);
 	const fullGrossMg = mgOfKg(packaging.cartonGrossKg);
+	const fullNetMg = wholeTimes(netPerUnitMg, packaging.unitsPerCarton);
+	const tareMg = wholeMinus(fullGrossMg, fullNetMg);
+	const cartonMm3 = wholeProductOf(lengthMm, widthMm, heightMm);
 	return {
 		packaging,
-		netPerUnit,
-		fullGross,
-		tare,
-		cartonM3,
 		netPerUnitMg,
 		fullGrossMg,
-		tareMg: wholeMinus(fullGrossMg, wholeTimes(netPerUnitMg, packaging.unitsPerCarton)),
-		cartonMm3: wholeProductOf(packaging.lengthMm, packaging.widthMm, packaging.heightMm),
+		tareMg,
+		cartonMm3,
 		carton: {
-			lengthMm: packaging.lengthMm,
-			widthMm: packaging.widthMm,
-			heightMm: packaging.heightMm,
-			volumeM3: m3Out(cartonM3),
-			tareKg: kgOut(tare),
-			fullGrossKg: kgOut(fullGross)
+			lengthMm,
+			widthMm,
+			heightMm,
+			volumeM3: wholeFixed(cartonMm3, 9, 6),
+			tareKg: kgOfMg(tareMg),
+			fullGrossKg: kgOfMg(fullGrossMg)
 		},
-		fullNetKg: kgOut(netPerUnit.times(packaging.unitsPerCarton)),
-		fullGrossExact: fullGross.toFixed()
+		fullNetKg: kgOfMg(fullNetMg),
+		fullGrossExact: wholePlain(fullGrossMg, 6)
 	};
 }
 

@@ -23,11 +23,19 @@ import {
 	type CartonTotals,
 	type Packaging
 } from './cartons';
-import { ZERO, exact, kgOut, m3Out } from './exact';
+import { exact, kgOut, m3Out } from './exact';
 import { palletStowage, planPalletsOfMasses, type PalletPlan, type PalletSpec } from './pallets';
 import { MESSAGES, isPositiveInt, type Problem } from './problem';
 import { measureInputSchema, type MeasureInput } from './schema';
-import { mgOfKg, wholePlain, wholePlus, wholeToDecimal, type Whole } from './whole-units';
+import {
+	mgOfKg,
+	wholeFixed,
+	wholePlain,
+	wholePlus,
+	wholeTimes,
+	wholeToDecimal,
+	type Whole
+} from './whole-units';
 
 export interface MeasuredLine extends CartonLine {
 	/** Index of the line in the input (0-based). */
@@ -157,15 +165,17 @@ export function measure(input: MeasureInput): MeasureResult {
 		}
 	});
 	if (problems.length > 0) return { ok: false, problems };
-	let net = ZERO;
-	let gross = ZERO;
-	let volume = ZERO;
+	let netMg: Whole = 0;
+	let grossMg: Whole = 0;
+	let mm3: Whole = 0;
 	for (const { facts, quantity, cartons } of sumsBySku.values()) {
-		const productNet = facts.netPerUnit.times(quantity);
-		net = net.plus(productNet);
-		gross = gross.plus(facts.tare.times(cartons)).plus(productNet);
-		volume = volume.plus(facts.cartonM3.times(cartons));
+		const productNet = wholeTimes(facts.netPerUnitMg, quantity);
+		netMg = wholePlus(netMg, productNet);
+		grossMg = wholePlus(wholePlus(grossMg, wholeTimes(facts.tareMg, cartons)), productNet);
+		mm3 = wholePlus(mm3, wholeTimes(facts.cartonMm3, cartons));
 	}
+	const gross = wholeToDecimal(grossMg, 6);
+	const volume = wholeToDecimal(mm3, 9);
 
 	let pallets: MeasuredPallets | null = null;
 	let pieces = cartonPieces;
@@ -258,9 +268,9 @@ export function measure(input: MeasureInput): MeasureResult {
 		totals: {
 			units,
 			cartons: nextCarton - 1,
-			netKg: kgOut(net),
-			grossKg: kgOut(gross),
-			volumeM3: m3Out(volume)
+			netKg: wholeFixed(netMg, 6, 3),
+			grossKg: wholeFixed(grossMg, 6, 3),
+			volumeM3: wholeFixed(mm3, 9, 6)
 		},
 		pallets,
 		chargeable: chargeableWeightsOfTotals(pieces, pieceTotals),

@@ -30,6 +30,8 @@ import {
 	mgOfKg,
 	wholeEquals,
 	wholeFixed,
+	wholeFloorDiv,
+	wholeMinus,
 	wholePlus,
 	wholeProductOf,
 	wholeTimes,
@@ -260,10 +262,11 @@ export function palletStowage(
 	const problems = [...checkPallet(pallet), ...checkCarton(carton)];
 	if (problems.length > 0) return invalid(problems);
 
-	const gross = exact(carton.grossKg);
-	const room = exact(pallet.maxGrossKg).minus(pallet.tareKg);
-	const cartonsByWeight = room.dividedBy(gross).floor().toNumber();
+	const grossMg = mgOfKg(carton.grossKg);
+	const roomMg = wholeMinus(mgOfKg(pallet.maxGrossKg), mgOfKg(pallet.tareKg));
+	const cartonsByWeight = wholeFloorDiv(roomMg, grossMg);
 	if (cartonsByWeight < 1) {
+		const gross = exact(carton.grossKg);
 		return {
 			ok: false,
 			reason: 'weight',
@@ -274,9 +277,7 @@ export function palletStowage(
 		};
 	}
 	const layersByStacking =
-		carton.maxLoadOnTopKg === null
-			? 1
-			: exact(carton.maxLoadOnTopKg).dividedBy(gross).floor().plus(1).toNumber();
+		carton.maxLoadOnTopKg === null ? 1 : wholeFloorDiv(mgOfKg(carton.maxLoadOnTopKg), grossMg) + 1;
 	const clearance = pallet.maxLoadedHeightMm - pallet.deckHeightMm;
 
 	const tried: PalletStowage['tried'] = [];

@@ -7,6 +7,8 @@ import {
 	mgOfKg,
 	wholeEquals,
 	wholeFixed,
+	wholeFloorDiv,
+	wholeLessThan,
 	wholeMinus,
 	wholePlain,
 	wholePlus,
@@ -55,7 +57,23 @@ describe('whole arithmetic', () => {
 				expect(str(wholeMinus(a, b))).toBe(new D(a).minus(b).toFixed());
 				expect(str(wholePlus(wholeTimes(a, b), a))).toBe(new D(a).times(b).plus(a).toFixed());
 				expect(wholeEquals(wholeTimes(a, b), new D(a).times(b))).toBe(true);
+				expect(wholeLessThan(a, b)).toBe(a < b);
+				expect(wholeLessThan(wholeTimes(a, 3), wholeTimes(b, 3))).toBe(a < b);
 			})
+		);
+	});
+
+	it('divides to whole numbers like decimal.js dividedBy().floor()', () => {
+		expect(wholeFloorDiv(1_500_000_000, 13_200_000)).toBe(113);
+		expect(wholeFloorDiv(26_400_000, 13_200_000)).toBe(2);
+		fc.assert(
+			fc.property(big, big, (a, b) => {
+				fc.pre(b > 0);
+				expect(wholeFloorDiv(a, b)).toBe(new D(a).dividedBy(b).floor().toNumber());
+			})
+		);
+		expect(wholeFloorDiv(wholeTimes(Number.MAX_SAFE_INTEGER, 4), 2)).toBe(
+			2 * Number.MAX_SAFE_INTEGER
 		);
 	});
 

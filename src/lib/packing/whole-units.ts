@@ -54,6 +54,15 @@ export function wholeMinus(a: Whole, b: Whole): Whole {
 	return new Exact(a).minus(b);
 }
 
+/** ⌊a ÷ b⌋ for a ≥ 0 and b > 0 (how many cartons a mass allows), as a JS number. */
+export function wholeFloorDiv(a: Whole, b: Whole): number {
+	if (typeof a === 'number' && typeof b === 'number' && a >= 0 && b > 0) {
+		// a − (a mod b) is an exact multiple of b, so the quotient is a whole number, exactly divided.
+		return (a - (a % b)) / b;
+	}
+	return new Exact(a).dividedBy(b).floor().toNumber();
+}
+
 /** The product of whole numbers (mm × mm × mm…), exact. */
 export function wholeProductOf(...factors: number[]): Whole {
 	let product: Whole = 1;
@@ -64,6 +73,11 @@ export function wholeProductOf(...factors: number[]): Whole {
 export function wholeEquals(a: Whole, b: Whole): boolean {
 	if (typeof a === 'number' && typeof b === 'number') return a === b;
 	return new Exact(a).equals(b);
+}
+
+export function wholeLessThan(a: Whole, b: Whole): boolean {
+	if (typeof a === 'number' && typeof b === 'number') return a < b;
+	return new Exact(a).lessThan(b);
 }
 
 /** The quantity in the large unit (kg, m³) as a decimal: `w` × 10^−shift, exact. */
