@@ -254,17 +254,23 @@ function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 		pieces.forEach((piece, index) => line(pieceName(piece, index), piece, piece.count));
 	} else {
 		// Many pieces: one line per size (the volume depends on the size only), naming a few.
-		const groups = new Map<string, { piece: ChargeablePiece; count: number; names: string[] }>();
+		type SizeGroup = { piece: ChargeablePiece; count: number; kinds: number; names: string[] };
+		const groups = new Map<string, SizeGroup>();
 		pieces.forEach((piece, index) => {
 			const key = `${piece.lengthMm}×${piece.widthMm}×${piece.heightMm}`;
-			const group = groups.get(key) ?? { piece, count: 0, names: [] };
-			group.count += piece.count;
-			group.names.push(piece.label ?? `Piece ${index + 1}`);
-			groups.set(key, group);
+			let size = groups.get(key);
+			if (size === undefined) {
+				size = { piece, count: 0, kinds: 0, names: [] };
+				groups.set(key, size);
+			}
+			size.count += piece.count;
+			size.kinds += 1;
+			// Only three are named in the step.
+			if (size.names.length < 3) size.names.push(piece.label ?? `Piece ${index + 1}`);
 		});
-		for (const { piece, count, names } of groups.values()) {
-			const shown = names.slice(0, 3).join('; ');
-			const more = names.length > 3 ? `; and ${group(String(names.length - 3))} more` : '';
+		for (const { piece, count, kinds, names } of groups.values()) {
+			const shown = names.join('; ');
+			const more = kinds > 3 ? `; and ${group(String(kinds - 3))} more` : '';
 			line(
 				`${group(String(count))} piece${count === 1 ? '' : 's'} (${shown}${more})`,
 				piece,

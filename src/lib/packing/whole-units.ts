@@ -97,8 +97,11 @@ export function wholeFixed(w: Whole, shift: number, dp: number): string {
 		const rest = w % step; // exact for integers
 		// (w − rest) is a multiple of step, so the quotient is a whole number and exactly divided.
 		const rounded = (w - rest) / step + (2 * rest >= step ? 1 : 0);
-		const digits = String(rounded).padStart(dp + 1, '0');
-		return `${digits.slice(0, -dp)}.${digits.slice(-dp)}`;
+		const unit = POW10[dp] ?? 1;
+		const fraction = rounded % unit;
+		// Padding by prefix: the hot path of measure() formats several figures per line.
+		const digits = String(fraction + unit); // "1" followed by exactly dp digits
+		return `${(rounded - fraction) / unit}.${digits.slice(1)}`;
 	}
 	return wholeToDecimal(w, shift).toFixed(dp, Decimal.ROUND_HALF_UP);
 }
