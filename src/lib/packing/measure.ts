@@ -24,7 +24,13 @@ import {
 	type Packaging
 } from './cartons';
 import { exact, kgOut, m3Out } from './exact';
-import { palletStowage, planPalletsOfMasses, type PalletPlan, type PalletSpec } from './pallets';
+import {
+	palletStowage,
+	planPalletsOfMasses,
+	type PalletCarton,
+	type PalletPlan,
+	type PalletSpec
+} from './pallets';
 import { MESSAGES, isPositiveInt, type Problem } from './problem';
 import { measureInputSchema, type MeasureInput } from './schema';
 import {
@@ -186,26 +192,31 @@ export function measure(input: MeasureInput): MeasureResult {
 		let nextPallet = 1;
 		let palletGrossMg: Whole = 0;
 		let palletMm3: Whole = 0;
-		const stowageBySku = new Map<string, ReturnType<typeof palletStowage>>();
+		const stowageBySku = new Map<
+			string,
+			{ carton: PalletCarton; stowage: ReturnType<typeof palletStowage> }
+		>();
 		const palletTareMg = mgOfKg(pallet.tareKg);
 		measured.forEach((line, i) => {
-			const packaging = bySku.get(line.sku)?.packaging;
 			const m = masses[i];
-			if (packaging === undefined || packaging === null || m === undefined) return;
-			const carton = {
-				lengthMm: packaging.lengthMm,
-				widthMm: packaging.widthMm,
-				heightMm: packaging.heightMm,
-				grossKg: packaging.cartonGrossKg,
-				orientation: packaging.orientation,
-				maxLoadOnTopKg: packaging.maxLoadOnTopKg
-			};
-			// The stowage depends on the product only: searched once per product.
-			let stowage = stowageBySku.get(line.sku);
-			if (stowage === undefined) {
-				stowage = palletStowage(pallet, carton);
-				stowageBySku.set(line.sku, stowage);
+			if (m === undefined) return;
+			// The carton and its stowage depend on the product only: worked out once per product.
+			let known = stowageBySku.get(line.sku);
+			if (known === undefined) {
+				const packaging = bySku.get(line.sku)?.packaging;
+				if (packaging === undefined || packaging === null) return;
+				const carton: PalletCarton = {
+					lengthMm: packaging.lengthMm,
+					widthMm: packaging.widthMm,
+					heightMm: packaging.heightMm,
+					grossKg: packaging.cartonGrossKg,
+					orientation: packaging.orientation,
+					maxLoadOnTopKg: packaging.maxLoadOnTopKg
+				};
+				known = { carton, stowage: palletStowage(pallet, carton) };
+				stowageBySku.set(line.sku, known);
 			}
+			const { carton, stowage } = known;
 			if (!stowage.ok) {
 				problems.push({
 					path: 'pallet',
@@ -232,17 +243,14 @@ export function measure(input: MeasureInput): MeasureResult {
 			nextPallet = result.plan.lastPallet + 1;
 			palletGrossMg = wholePlus(palletGrossMg, result.exact.grossMg);
 			palletMm3 = wholePlus(palletMm3, result.exact.volumeMm3);
-			result.exact.groups.forEach((g, k) => {
-				const group = result.plan.groups[k];
+			result.plan.groups.forEach((g, k) => {
 				palletPieces.push({
 					lengthMm: pallet.lengthMm,
 					widthMm: pallet.widthMm,
 					heightMm: g.loadedHeightMm,
-					grossKg: wholePlain(g.grossPerPalletMg, 6),
+					grossKg: wholePlain(result.exact.groupGrossMg[k] ?? 0, 6),
 					count: g.pallets,
-					label:
-						`Line ${line.lineIndex + 1}, ` +
-						(group === undefined ? 'pallets' : range('pallet', group.fromPallet, group.toPallet))
+					label: `Line ${line.lineIndex + 1}, ${range('pallet', g.fromPallet, g.toPallet)}`
 				});
 			});
 		});

@@ -33,7 +33,6 @@ import {
 	wholeFloorDiv,
 	wholeMinus,
 	wholePlus,
-	wholeProductOf,
 	wholeTimes,
 	type Whole
 } from './whole-units';
@@ -164,7 +163,8 @@ export type PalletPlanResult = { ok: true; plan: PalletPlan } | PalletError;
 export interface PalletPlanExact {
 	grossMg: Whole;
 	volumeMm3: Whole;
-	groups: { pallets: number; loadedHeightMm: number; grossPerPalletMg: Whole }[];
+	/** Gross of one pallet of each of the plan's groups, in the same order. */
+	groupGrossMg: Whole[];
 }
 
 function invalid(problems: Problem[]): PalletError {
@@ -363,53 +363,48 @@ function planExact(
 	const { pallet, cartons } = input;
 	const firstCarton = input.firstCarton ?? 1;
 	const firstPallet = input.firstPallet ?? 1;
-	const perPallet = stowage.cartonsPerPallet;
-	// Once per line: whole milligrams and mm³, not decimal.js (see whole-units.ts).
+	const { cartonsPerPallet: perPallet, perLayer, layerHeightMm } = stowage;
+	// Once per line: whole milligrams and mm³, not decimal.js (see whole-units.ts), and each
+	// group's figures worked out once, as measure() calls this for every line.
 	const gross = masses.cartonGrossMg;
 	const lastGross = masses.lastCartonGrossMg;
 	const tare = masses.palletTareMg;
 	const pallets = Math.ceil(cartons / perPallet);
 	const lastCount = cartons - (pallets - 1) * perPallet;
-	const heightFor = (n: number): number =>
-		pallet.deckHeightMm + Math.ceil(n / stowage.perLayer) * stowage.layerHeightMm;
+	const footprintMm2 = wholeTimes(pallet.lengthMm, pallet.widthMm);
 
 	const groups: PalletGroup[] = [];
-	const exactGroups: PalletPlanExact['groups'] = [];
+	const groupGrossMg: Whole[] = [];
+	let total: Whole = 0;
+	let volume: Whole = 0;
 	const add = (from: number, count: number, each: number, grossEach: Whole): void => {
 		const firstOfGroup = firstCarton + (from - firstPallet) * perPallet;
+		const layers = Math.ceil(each / perLayer);
+		const loadedHeightMm = pallet.deckHeightMm + layers * layerHeightMm;
 		groups.push({
 			fromPallet: from,
 			toPallet: from + count - 1,
 			pallets: count,
 			cartonsPerPallet: each,
-			layers: Math.ceil(each / stowage.perLayer),
-			loadedHeightMm: heightFor(each),
+			layers,
+			loadedHeightMm,
 			grossKgPerPallet: wholeFixed(grossEach, 6, 3),
 			firstCarton: firstOfGroup,
 			lastCarton: firstOfGroup + count * each - 1
 		});
-		exactGroups.push({
-			pallets: count,
-			loadedHeightMm: heightFor(each),
-			grossPerPalletMg: grossEach
-		});
+		groupGrossMg.push(grossEach);
+		total = wholePlus(total, wholeTimes(grossEach, count));
+		volume = wholePlus(volume, wholeTimes(wholeTimes(footprintMm2, loadedHeightMm), count));
 	};
 	const fullGross = wholePlus(tare, wholeTimes(gross, perPallet));
-	const lastPalletGross = wholePlus(wholePlus(tare, wholeTimes(gross, lastCount - 1)), lastGross);
 	if (lastCount === perPallet && wholeEquals(lastGross, gross)) {
 		add(firstPallet, pallets, perPallet, fullGross);
 	} else {
 		if (pallets > 1) add(firstPallet, pallets - 1, perPallet, fullGross);
+		const lastPalletGross = wholePlus(wholePlus(tare, wholeTimes(gross, lastCount - 1)), lastGross);
 		add(firstPallet + pallets - 1, 1, lastCount, lastPalletGross);
 	}
 
-	let total: Whole = 0;
-	let volume: Whole = 0;
-	for (const g of exactGroups) {
-		total = wholePlus(total, wholeTimes(g.grossPerPalletMg, g.pallets));
-		const mm3 = wholeProductOf(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm, g.pallets);
-		volume = wholePlus(volume, mm3);
-	}
 	const partPallets = lastCount < perPallet ? 1 : 0;
 	return {
 		plan: {
@@ -424,7 +419,7 @@ function planExact(
 			grossKg: wholeFixed(total, 6, 3),
 			volumeM3: wholeFixed(volume, 9, 6)
 		},
-		exact: { grossMg: total, volumeMm3: volume, groups: exactGroups }
+		exact: { grossMg: total, volumeMm3: volume, groupGrossMg }
 	};
 }
 
