@@ -2,9 +2,10 @@
  * Measure a shipment: cartons per line (numbered across lines), totals, optionally pallets, and
  * the chargeable weight per mode — of the cartons, or of the pallets when palletised.
  *
- * The input is validated with `measureInputSchema` here too, so a caller that skipped it still
- * gets field-path problems instead of a throw. Any problem means no measurement (`ok: false`):
- * a partial packing list or total would be worse than none.
+ * The input is validated with `measureInputSchema` here too (unless it is that schema's own frozen
+ * output), so a caller that skipped it still gets field-path problems instead of a throw. Any
+ * problem means no measurement (`ok: false`): a partial packing list or total would be worse than
+ * none.
  *
  * Pure module: no framework imports.
  */
@@ -32,7 +33,7 @@ import {
 	type PalletSpec
 } from './pallets';
 import { MESSAGES, isPositiveInt, type Problem } from './problem';
-import { measureInputSchema, type MeasureInput } from './schema';
+import { isValidatedMeasureInput, measureInputSchema, type MeasureInput } from './schema';
 import {
 	mgOfKg,
 	wholeFixed,
@@ -80,7 +81,9 @@ function range(noun: string, from: number, to: number): string {
 
 /** Measure a shipment; see the module comment. */
 export function measure(input: MeasureInput): MeasureResult {
-	const parsed = measureInputSchema.safeParse(input);
+	const parsed = isValidatedMeasureInput(input)
+		? { success: true as const, data: input }
+		: measureInputSchema.safeParse(input);
 	if (!parsed.success) {
 		return {
 			ok: false,
