@@ -192,8 +192,6 @@ export interface CartonProduct {
 	cartonMm3: Whole;
 	carton: CartonLine['carton'];
 	fullNetKg: string;
-	/** The full carton's gross, every decimal kept (for chargeable-weight pieces). */
-	fullGrossExact: string;
 }
 
 export function cartonProduct(netKgPerUnit: string, packaging: Packaging): CartonProduct {
@@ -217,8 +215,7 @@ export function cartonProduct(netKgPerUnit: string, packaging: Packaging): Carto
 			tareKg: kgOfMg(tareMg),
 			fullGrossKg: kgOfMg(fullGrossMg)
 		},
-		fullNetKg: kgOfMg(fullNetMg),
-		fullGrossExact: wholePlain(fullGrossMg, 6)
+		fullNetKg: kgOfMg(fullNetMg)
 	};
 }
 

@@ -255,9 +255,11 @@ function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 	} else {
 		// Many pieces: one line per size (the volume depends on the size only), naming a few.
 		type SizeGroup = { piece: ChargeablePiece; count: number; kinds: number; names: string[] };
-		const groups = new Map<string, SizeGroup>();
+		const groups = new Map<number | string, SizeGroup>();
 		pieces.forEach((piece, index) => {
-			const key = `${piece.lengthMm}×${piece.widthMm}×${piece.heightMm}`;
+			const { lengthMm: l, widthMm: w, heightMm: h } = piece;
+			// A number key while the sides fit in 5 digits (all of measure's do), cheaper than text.
+			const key = l < 1e5 && w < 1e5 && h < 1e5 ? (l * 1e5 + w) * 1e5 + h : `${l}×${w}×${h}`;
 			let size = groups.get(key);
 			if (size === undefined) {
 				size = { piece, count: 0, kinds: 0, names: [] };

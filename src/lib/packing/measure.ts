@@ -79,6 +79,34 @@ function range(noun: string, from: number, to: number): string {
 	return from === to ? `${noun} ${from}` : `${noun}s ${from}–${to}`;
 }
 
+/**
+ * A chargeable piece for a run of one line's cartons or pallets. Its label and gross string are
+ * spelt out only when read: the steps name three pieces per size and the totals are already
+ * known, so most of the thousand or so pieces of a large shipment never need them.
+ */
+class LinePiece implements ChargeablePiece {
+	constructor(
+		readonly lengthMm: number,
+		readonly widthMm: number,
+		readonly heightMm: number,
+		readonly count: number,
+		private readonly grossMg: Whole,
+		private readonly lineIndex: number,
+		private readonly noun: 'carton' | 'pallet',
+		private readonly from: number,
+		private readonly to: number,
+		private readonly note = ''
+	) {}
+
+	get grossKg(): string {
+		return wholePlain(this.grossMg, 6);
+	}
+
+	get label(): string {
+		return `Line ${this.lineIndex + 1}, ${range(this.noun, this.from, this.to)}${this.note}`;
+	}
+}
+
 /** Measure a shipment; see the module comment. */
 export function measure(input: MeasureInput): MeasureResult {
 	const parsed = isValidatedMeasureInput(input)
@@ -151,26 +179,37 @@ export function measure(input: MeasureInput): MeasureResult {
 		}
 		// Properties spelt out: an object spread here cost V8 microseconds per piece (measured).
 		const { lengthMm, widthMm, heightMm } = packaging;
-		const label = `Line ${lineIndex + 1}`;
 		if (c.fullCartons > 0) {
-			cartonPieces.push({
-				lengthMm,
-				widthMm,
-				heightMm,
-				grossKg: facts.fullGrossExact,
-				count: c.fullCartons,
-				label: `${label}, ${range('carton', c.firstCarton, c.firstCarton + c.fullCartons - 1)}`
-			});
+			const last = c.firstCarton + c.fullCartons - 1;
+			cartonPieces.push(
+				new LinePiece(
+					lengthMm,
+					widthMm,
+					heightMm,
+					c.fullCartons,
+					m.fullGrossMg,
+					lineIndex,
+					'carton',
+					c.firstCarton,
+					last
+				)
+			);
 		}
 		if (m.remainderGrossMg !== null) {
-			cartonPieces.push({
-				lengthMm,
-				widthMm,
-				heightMm,
-				grossKg: wholePlain(m.remainderGrossMg, 6),
-				count: 1,
-				label: `${label}, ${range('carton', c.lastCarton, c.lastCarton)} (part-filled)`
-			});
+			cartonPieces.push(
+				new LinePiece(
+					lengthMm,
+					widthMm,
+					heightMm,
+					1,
+					m.remainderGrossMg,
+					lineIndex,
+					'carton',
+					c.lastCarton,
+					c.lastCarton,
+					' (part-filled)'
+				)
+			);
 		}
 	});
 	if (problems.length > 0) return { ok: false, problems };
@@ -247,14 +286,19 @@ export function measure(input: MeasureInput): MeasureResult {
 			palletGrossMg = wholePlus(palletGrossMg, result.exact.grossMg);
 			palletMm3 = wholePlus(palletMm3, result.exact.volumeMm3);
 			result.plan.groups.forEach((g, k) => {
-				palletPieces.push({
-					lengthMm: pallet.lengthMm,
-					widthMm: pallet.widthMm,
-					heightMm: g.loadedHeightMm,
-					grossKg: wholePlain(result.exact.groupGrossMg[k] ?? 0, 6),
-					count: g.pallets,
-					label: `Line ${line.lineIndex + 1}, ${range('pallet', g.fromPallet, g.toPallet)}`
-				});
+				palletPieces.push(
+					new LinePiece(
+						pallet.lengthMm,
+						pallet.widthMm,
+						g.loadedHeightMm,
+						g.pallets,
+						result.exact.groupGrossMg[k] ?? 0,
+						line.lineIndex,
+						'pallet',
+						g.fromPallet,
+						g.toPallet
+					)
+				);
 			});
 		});
 		if (problems.length > 0) return { ok: false, problems };

@@ -109,10 +109,16 @@ export function wholeFixed(w: Whole, shift: number, dp: number): string {
 /** `w` × 10^−shift with every decimal and no trailing zeros (as decimal.js `toFixed()`). */
 export function wholePlain(w: Whole, shift: number): string {
 	if (typeof w === 'number' && w >= 0 && shift >= 1 && shift <= 9) {
-		const digits = String(w).padStart(shift + 1, '0');
-		const fraction = digits.slice(-shift).replace(/0+$/, '');
-		const whole = digits.slice(0, -shift);
-		return fraction === '' ? whole : `${whole}.${fraction}`;
+		const unit = POW10[shift] ?? 1;
+		let fraction = w % unit; // exact for integers
+		const whole = (w - fraction) / unit; // a whole number, exactly divided
+		if (fraction === 0) return String(whole);
+		let places = shift;
+		while (fraction % 10 === 0) {
+			fraction /= 10;
+			places -= 1;
+		}
+		return `${whole}.${String(fraction + (POW10[places] ?? 1)).slice(1)}`;
 	}
 	return wholeToDecimal(w, shift).toFixed();
 }
