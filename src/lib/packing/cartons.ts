@@ -4,8 +4,6 @@
  *
  * Pure module: no framework imports.
  */
-import type Decimal from 'decimal.js';
-import { ZERO, boxM3, exact, kgOut, m3Out } from './exact';
 import {
 	MESSAGES,
 	checkMillimetres,
@@ -15,6 +13,17 @@ import {
 	prefixProblems,
 	type Problem
 } from './problem';
+import {
+	mgOfKg,
+	wholeFixed,
+	wholeLessThan,
+	wholeMinus,
+	wholePlain,
+	wholePlus,
+	wholeProductOf,
+	wholeTimes,
+	type Whole
+} from './whole-units';
 
 export const ORIENTATIONS = ['any', 'this_way_up'] as const;
 /** 'this_way_up': the carton's height stays vertical. 'any': it may stand on any face. */
@@ -97,33 +106,21 @@ export function countCartons(
 	return { fullCartons, remainderUnits, cartons: fullCartons + (remainderUnits > 0 ? 1 : 0) };
 }
 
-/** Exact masses of one line's cartons (kg). */
+/** Exact masses of one line's cartons, in whole milligrams (see whole-units.ts). */
 export interface CartonMasses {
-	netPerUnit: Decimal;
-	tare: Decimal;
-	fullGross: Decimal;
+	netPerUnitMg: Whole;
+	tareMg: Whole;
+	fullGrossMg: Whole;
 	/** Gross of the remainder carton, or null when there is none. */
-	remainderGross: Decimal | null;
-	net: Decimal;
-	gross: Decimal;
+	remainderGrossMg: Whole | null;
+	netMg: Whole;
+	grossMg: Whole;
 }
 
 /** The exact masses for a line whose input is valid (see `checkCartonLine`). */
 export function cartonMasses(input: CartonLineInput): CartonMasses {
-	const { quantity, packaging } = input;
-	const netPerUnit = exact(input.netKgPerUnit);
-	const fullGross = exact(packaging.cartonGrossKg);
-	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
-	const { cartons, remainderUnits } = countCartons(quantity, packaging.unitsPerCarton);
-	const net = netPerUnit.times(quantity);
-	return {
-		netPerUnit,
-		tare,
-		fullGross,
-		remainderGross: remainderUnits > 0 ? tare.plus(netPerUnit.times(remainderUnits)) : null,
-		net,
-		gross: tare.times(cartons).plus(net)
-	};
+	return packProductCartons(cartonProduct(input.netKgPerUnit, input.packaging), input.quantity, 1)
+		.masses;
 }
 
 /** Problems with the packaging alone (paths relative to the packaging). */
@@ -153,13 +150,14 @@ export function checkPackaging(packaging: Packaging): Problem[] {
  * the product: "packaging.cartonGrossKg"), or null. Inputs must be well-formed.
  */
 export function tareProblem(netKgPerUnit: string, packaging: Packaging): Problem | null {
-	const units = exact(netKgPerUnit).times(packaging.unitsPerCarton);
-	if (!exact(packaging.cartonGrossKg).lessThan(units)) return null;
+	// Whole milligrams: the schema runs this for every product of every request.
+	const unitsMg = wholeTimes(mgOfKg(netKgPerUnit), packaging.unitsPerCarton);
+	if (!wholeLessThan(mgOfKg(packaging.cartonGrossKg), unitsMg)) return null;
 	return {
 		path: 'packaging.cartonGrossKg',
 		message:
 			`A full carton’s gross (${packaging.cartonGrossKg} kg) must be at least the net mass of ` +
-			`its ${packaging.unitsPerCarton} units (${units.toFixed()} kg).`
+			`its ${packaging.unitsPerCarton} units (${wholePlain(unitsMg, 6)} kg).`
 	};
 }
 
@@ -187,41 +185,49 @@ export function checkCartonLine(input: CartonLineInput): Problem[] {
  */
 export interface CartonProduct {
 	packaging: Packaging;
-	netPerUnit: Decimal;
-	fullGross: Decimal;
-	tare: Decimal;
-	cartonM3: Decimal;
+	/** Whole milligrams and mm³ (see whole-units.ts). */
+	netPerUnitMg: Whole;
+	fullGrossMg: Whole;
+	tareMg: Whole;
+	cartonMm3: Whole;
 	carton: CartonLine['carton'];
 	fullNetKg: string;
-	/** The full carton's gross, every decimal kept (for chargeable-weight pieces). */
-	fullGrossExact: string;
 }
 
 export function cartonProduct(netKgPerUnit: string, packaging: Packaging): CartonProduct {
-	const netPerUnit = exact(netKgPerUnit);
-	const fullGross = exact(packaging.cartonGrossKg);
-	const tare = fullGross.minus(netPerUnit.times(packaging.unitsPerCarton));
-	const cartonM3 = boxM3(packaging.lengthMm, packaging.widthMm, packaging.heightMm);
+	const { lengthMm, widthMm, heightMm } = packaging;
+	const netPerUnitMg = mgOfKg(netKgPerUnit);
+	const fullGrossMg = mgOfKg(packaging.cartonGrossKg);
+	const fullNetMg = wholeTimes(netPerUnitMg, packaging.unitsPerCarton);
+	const tareMg = wholeMinus(fullGrossMg, fullNetMg);
+	const cartonMm3 = wholeProductOf(lengthMm, widthMm, heightMm);
 	return {
 		packaging,
-		netPerUnit,
-		fullGross,
-		tare,
-		cartonM3,
+		netPerUnitMg,
+		fullGrossMg,
+		tareMg,
+		cartonMm3,
 		carton: {
-			lengthMm: packaging.lengthMm,
-			widthMm: packaging.widthMm,
-			heightMm: packaging.heightMm,
-			volumeM3: m3Out(cartonM3),
-			tareKg: kgOut(tare),
-			fullGrossKg: kgOut(fullGross)
+			lengthMm,
+			widthMm,
+			heightMm,
+			volumeM3: wholeFixed(cartonMm3, 9, 6),
+			tareKg: kgOfMg(tareMg),
+			fullGrossKg: kgOfMg(fullGrossMg)
 		},
-		fullNetKg: kgOut(netPerUnit.times(packaging.unitsPerCarton)),
-		fullGrossExact: fullGross.toFixed()
+		fullNetKg: kgOfMg(fullNetMg)
 	};
 }
 
-/** One valid line's cartons and exact masses, from its product's shared figures. */
+/** Kilograms to 3 decimals from whole milligrams (as `kgOut`). */
+function kgOfMg(mg: Whole): string {
+	return wholeFixed(mg, 6, 3);
+}
+
+/**
+ * One valid line's cartons and exact masses, from its product's shared figures. Called once per
+ * line, so it works in whole milligrams and mm³ rather than decimal.js (see whole-units.ts).
+ */
 export function packProductCartons(
 	product: CartonProduct,
 	quantity: number,
@@ -229,17 +235,17 @@ export function packProductCartons(
 ): { line: CartonLine; masses: CartonMasses } {
 	const upc = product.packaging.unitsPerCarton;
 	const count = countCartons(quantity, upc);
-	const { netPerUnit, tare, fullGross } = product;
-	const net = netPerUnit.times(quantity);
-	const remainderGross =
-		count.remainderUnits > 0 ? tare.plus(netPerUnit.times(count.remainderUnits)) : null;
+	const { netPerUnitMg, tareMg, fullGrossMg } = product;
+	const netMg = wholeTimes(netPerUnitMg, quantity);
+	const remainderNetMg = wholeTimes(netPerUnitMg, count.remainderUnits);
+	const remainderGrossMg = count.remainderUnits > 0 ? wholePlus(tareMg, remainderNetMg) : null;
 	const masses: CartonMasses = {
-		netPerUnit,
-		tare,
-		fullGross,
-		remainderGross,
-		net,
-		gross: tare.times(count.cartons).plus(net)
+		netPerUnitMg,
+		tareMg,
+		fullGrossMg,
+		remainderGrossMg,
+		netMg,
+		grossMg: wholePlus(wholeTimes(tareMg, count.cartons), netMg)
 	};
 	const lastCarton = firstCarton + count.cartons - 1;
 	const groups: CartonGroup[] = [];
@@ -253,28 +259,31 @@ export function packProductCartons(
 			grossKgPerCarton: product.carton.fullGrossKg
 		});
 	}
-	if (remainderGross !== null) {
+	if (remainderGrossMg !== null) {
 		groups.push({
 			fromCarton: lastCarton,
 			toCarton: lastCarton,
 			cartons: 1,
 			unitsPerCarton: count.remainderUnits,
-			netKgPerCarton: kgOut(netPerUnit.times(count.remainderUnits)),
-			grossKgPerCarton: kgOut(remainderGross)
+			netKgPerCarton: kgOfMg(remainderNetMg),
+			grossKgPerCarton: kgOfMg(remainderGrossMg)
 		});
 	}
 	return {
 		line: {
 			quantity,
 			unitsPerCarton: upc,
-			...count,
+			// Spelt out rather than spread: a spread inside a literal is slow in V8.
+			fullCartons: count.fullCartons,
+			remainderUnits: count.remainderUnits,
+			cartons: count.cartons,
 			firstCarton,
 			lastCarton,
 			groups,
 			carton: product.carton,
-			netKg: kgOut(net),
-			grossKg: kgOut(masses.gross),
-			volumeM3: m3Out(product.cartonM3.times(count.cartons))
+			netKg: kgOfMg(netMg),
+			grossKg: kgOfMg(masses.grossMg),
+			volumeM3: wholeFixed(wholeTimes(product.cartonMm3, count.cartons), 9, 6)
 		},
 		masses
 	};
@@ -305,9 +314,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 	const lines: CartonLine[] = [];
 	let next = 1;
 	let units = 0;
-	let net = ZERO;
-	let gross = ZERO;
-	let volume = ZERO;
+	let net: Whole = 0;
+	let gross: Whole = 0;
+	let volume: Whole = 0;
 	for (const input of inputs) {
 		// Inputs were checked above: pack and weigh each line once.
 		const product = cartonProduct(input.netKgPerUnit, input.packaging);
@@ -315,9 +324,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 		lines.push(line);
 		next = line.lastCarton + 1;
 		units += input.quantity;
-		net = net.plus(masses.net);
-		gross = gross.plus(masses.gross);
-		volume = volume.plus(product.cartonM3.times(line.cartons));
+		net = wholePlus(net, masses.netMg);
+		gross = wholePlus(gross, masses.grossMg);
+		volume = wholePlus(volume, wholeTimes(product.cartonMm3, line.cartons));
 	}
 	return {
 		ok: true,
@@ -325,9 +334,9 @@ export function packCartonLines(inputs: readonly CartonLineInput[]): CartonLines
 		totals: {
 			units,
 			cartons: next - 1,
-			netKg: kgOut(net),
-			grossKg: kgOut(gross),
-			volumeM3: m3Out(volume)
+			netKg: kgOfMg(net),
+			grossKg: kgOfMg(gross),
+			volumeM3: wholeFixed(volume, 9, 6)
 		}
 	};
 }

@@ -15,8 +15,10 @@ import {
 	m3Out,
 	maxOf,
 	show,
-	wholeProduct
+	wholeProduct,
+	Exact
 } from './exact';
+import { showWhole, wholePlus, wholeProductOf, wholeTimes, type Whole } from './whole-units';
 
 export const CHARGE_MODES = ['air', 'courier', 'sea_lcl', 'road', 'sea_fcl'] as const;
 export type ChargeMode = (typeof CHARGE_MODES)[number];
@@ -190,6 +192,11 @@ export function mmToNearestCm(mm: number): number {
 }
 
 function cm(mm: number): string {
+	// Whole millimetres are tenths of a centimetre: the digits, no division (as show(mm ÷ 10, 1)).
+	if (Number.isSafeInteger(mm) && mm >= 0) {
+		const tenths = mm % 10;
+		return group(String((mm - tenths) / 10)) + (tenths === 0 ? '' : `.${tenths}`);
+	}
 	return show(exact(mm).dividedBy(10), 1);
 }
 
@@ -223,40 +230,49 @@ function roundedCm3(piece: ChargeablePiece) {
 	const l = mmToNearestCm(piece.lengthMm);
 	const w = mmToNearestCm(piece.widthMm);
 	const h = mmToNearestCm(piece.heightMm);
-	return { l, w, h, each: wholeProduct(l, w, h) };
+	return { l, w, h, each: wholeProductOf(l, w, h) };
 }
 
 function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 	const cached = volumeCache.get(pieces);
 	if (cached) return cached;
 	const steps: string[] = [];
-	let cm3 = ZERO;
+	// Whole cm³, as JS numbers while safe (see whole-units.ts): one step line per piece or size.
+	let cm3: Whole = 0;
 	const line = (name: string, piece: ChargeablePiece, count: number) => {
 		const { l, w, h, each } = roundedCm3(piece);
-		const all = each.times(count);
-		cm3 = cm3.plus(all);
+		const all = wholeTimes(each, count);
+		cm3 = wholePlus(cm3, all);
 		steps.push(
 			`${name}: ${cm(piece.lengthMm)} × ${cm(piece.widthMm)} × ` +
 				`${cm(piece.heightMm)} cm, to the nearest whole cm ${l} × ${w} × ${h} cm = ` +
-				`${show(each)} cm³` +
-				(count === 1 ? '' : ` each, ${show(all)} cm³ in all`)
+				`${showWhole(each)} cm³` +
+				(count === 1 ? '' : ` each, ${showWhole(all)} cm³ in all`)
 		);
 	};
 	if (pieces.length <= PIECE_DETAIL_LIMIT) {
 		pieces.forEach((piece, index) => line(pieceName(piece, index), piece, piece.count));
 	} else {
 		// Many pieces: one line per size (the volume depends on the size only), naming a few.
-		const groups = new Map<string, { piece: ChargeablePiece; count: number; names: string[] }>();
+		type SizeGroup = { piece: ChargeablePiece; count: number; kinds: number; names: string[] };
+		const groups = new Map<number | string, SizeGroup>();
 		pieces.forEach((piece, index) => {
-			const key = `${piece.lengthMm}×${piece.widthMm}×${piece.heightMm}`;
-			const group = groups.get(key) ?? { piece, count: 0, names: [] };
-			group.count += piece.count;
-			group.names.push(piece.label ?? `Piece ${index + 1}`);
-			groups.set(key, group);
+			const { lengthMm: l, widthMm: w, heightMm: h } = piece;
+			// A number key while the sides fit in 5 digits (all of measure's do), cheaper than text.
+			const key = l < 1e5 && w < 1e5 && h < 1e5 ? (l * 1e5 + w) * 1e5 + h : `${l}×${w}×${h}`;
+			let size = groups.get(key);
+			if (size === undefined) {
+				size = { piece, count: 0, kinds: 0, names: [] };
+				groups.set(key, size);
+			}
+			size.count += piece.count;
+			size.kinds += 1;
+			// Only three are named in the step.
+			if (size.names.length < 3) size.names.push(piece.label ?? `Piece ${index + 1}`);
 		});
-		for (const { piece, count, names } of groups.values()) {
-			const shown = names.slice(0, 3).join('; ');
-			const more = names.length > 3 ? `; and ${group(String(names.length - 3))} more` : '';
+		for (const { piece, count, kinds, names } of groups.values()) {
+			const shown = names.join('; ');
+			const more = kinds > 3 ? `; and ${group(String(kinds - 3))} more` : '';
 			line(
 				`${group(String(count))} piece${count === 1 ? '' : 's'} (${shown}${more})`,
 				piece,
@@ -264,7 +280,7 @@ function volumeSteps(pieces: readonly ChargeablePiece[]): VolumeSteps {
 			);
 		}
 	}
-	const result = { cm3, steps };
+	const result = { cm3: new Exact(cm3), steps };
 	volumeCache.set(pieces, result);
 	return result;
 }

@@ -4,7 +4,13 @@ import { describe, expect, expectTypeOf, it } from 'vitest';
 import type { z } from 'zod';
 import type { ChargeMode, ChargeableWeight } from './chargeable';
 import { measure, type MeasureResult } from './measure';
-import { measureResultSchema, type MeasureInput, type PackagingInput } from './schema';
+import {
+	isValidatedMeasureInput,
+	measureInputSchema,
+	measureResultSchema,
+	type MeasureInput,
+	type PackagingInput
+} from './schema';
 
 const router: PackagingInput = {
 	unitsPerCarton: 24,
@@ -308,5 +314,61 @@ describe('properties', () => {
 			}),
 			{ numRuns: 150 }
 		);
+	});
+});
+
+// measure() trusts measureInputSchema's own output without validating it again: that output must
+// be frozen (so it is still what the schema accepted) and measure like a plain copy.
+describe('measure of measureInputSchema output', () => {
+	it('is marked and deeply frozen, and measures like a plain copy', () => {
+		const parsed = measureInputSchema.parse(shipment(true));
+		expect(isValidatedMeasureInput(parsed)).toBe(true);
+		expect(Object.isFrozen(parsed.lines[0])).toBe(true);
+		expect(Object.isFrozen(parsed.products[0]?.packaging)).toBe(true);
+		expect(Object.isFrozen(parsed.pallet)).toBe(true);
+		expect(() => {
+			(parsed.lines[0] as { quantity: number }).quantity = 0;
+		}).toThrow(TypeError);
+		const copy = structuredClone(parsed);
+		expect(isValidatedMeasureInput(copy)).toBe(false);
+		expect(measure(parsed)).toEqual(measure(copy));
+	});
+
+	it('leaves the caller’s own object alone and still checks anything else', () => {
+		const own = shipment(false);
+		measureInputSchema.parse(own);
+		expect(isValidatedMeasureInput(own)).toBe(false);
+		expect(Object.isFrozen(own)).toBe(false);
+		const result = measure({ ...own, lines: [{ sku: 'NONE', quantity: 1 }] });
+		expect(result.ok).toBe(false);
+		expect(result.problems[0]?.path).toBe('lines.0.sku');
+	});
+});
+
+describe('measure past 2^53 milligrams', () => {
+	it('keeps totals exact when whole numbers outgrow JS numbers (decimal.js takes over)', () => {
+		// 10^9 units of 20.000001 kg: 2 × 10^16 mg and more, beyond 2^53 ≈ 9.007 × 10^15.
+		const result = ok(
+			measure({
+				products: [
+					{
+						sku: 'HEAVY',
+						netKgPerUnit: '20.000001',
+						packaging: { ...router, unitsPerCarton: 1, cartonGrossKg: '21.000001' }
+					}
+				],
+				lines: [{ sku: 'HEAVY', quantity: 1_000_000_000 }]
+			})
+		);
+		// Exact by hand: 20.000001 × 10^9 = 20 000 001 000; 21.000001 × 10^9 = 21 000 001 000;
+		// 0.4 × 0.3 × 0.25 m = 0.03 m³ per carton, × 10^9.
+		expect(result.totals).toEqual({
+			units: 1_000_000_000,
+			cartons: 1_000_000_000,
+			netKg: '20000001000.000',
+			grossKg: '21000001000.000',
+			volumeM3: '30000000.000000'
+		});
+		expect(result.lines[0]?.netKg).toBe('20000001000.000');
 	});
 });

@@ -2,9 +2,10 @@
  * Measure a shipment: cartons per line (numbered across lines), totals, optionally pallets, and
  * the chargeable weight per mode — of the cartons, or of the pallets when palletised.
  *
- * The input is validated with `measureInputSchema` here too, so a caller that skipped it still
- * gets field-path problems instead of a throw. Any problem means no measurement (`ok: false`):
- * a partial packing list or total would be worse than none.
+ * The input is validated with `measureInputSchema` here too (unless it is that schema's own frozen
+ * output), so a caller that skipped it still gets field-path problems instead of a throw. Any
+ * problem means no measurement (`ok: false`): a partial packing list or total would be worse than
+ * none.
  *
  * Pure module: no framework imports.
  */
@@ -23,10 +24,25 @@ import {
 	type CartonTotals,
 	type Packaging
 } from './cartons';
-import { ZERO, exact, kgOut, m3Out } from './exact';
-import { palletStowage, planPalletsOfMasses, type PalletPlan, type PalletSpec } from './pallets';
+import { exact, kgOut, m3Out } from './exact';
+import {
+	palletStowage,
+	planPalletsOfMasses,
+	type PalletCarton,
+	type PalletPlan,
+	type PalletSpec
+} from './pallets';
 import { MESSAGES, isPositiveInt, type Problem } from './problem';
-import { measureInputSchema, type MeasureInput } from './schema';
+import { isValidatedMeasureInput, measureInputSchema, type MeasureInput } from './schema';
+import {
+	mgOfKg,
+	wholeFixed,
+	wholePlain,
+	wholePlus,
+	wholeTimes,
+	wholeToDecimal,
+	type Whole
+} from './whole-units';
 
 export interface MeasuredLine extends CartonLine {
 	/** Index of the line in the input (0-based). */
@@ -63,9 +79,39 @@ function range(noun: string, from: number, to: number): string {
 	return from === to ? `${noun} ${from}` : `${noun}s ${from}–${to}`;
 }
 
+/**
+ * A chargeable piece for a run of one line's cartons or pallets. Its label and gross string are
+ * spelt out only when read: the steps name three pieces per size and the totals are already
+ * known, so most of the thousand or so pieces of a large shipment never need them.
+ */
+class LinePiece implements ChargeablePiece {
+	constructor(
+		readonly lengthMm: number,
+		readonly widthMm: number,
+		readonly heightMm: number,
+		readonly count: number,
+		private readonly grossMg: Whole,
+		private readonly lineIndex: number,
+		private readonly noun: 'carton' | 'pallet',
+		private readonly from: number,
+		private readonly to: number,
+		private readonly note = ''
+	) {}
+
+	get grossKg(): string {
+		return wholePlain(this.grossMg, 6);
+	}
+
+	get label(): string {
+		return `Line ${this.lineIndex + 1}, ${range(this.noun, this.from, this.to)}${this.note}`;
+	}
+}
+
 /** Measure a shipment; see the module comment. */
 export function measure(input: MeasureInput): MeasureResult {
-	const parsed = measureInputSchema.safeParse(input);
+	const parsed = isValidatedMeasureInput(input)
+		? { success: true as const, data: input }
+		: measureInputSchema.safeParse(input);
 	if (!parsed.success) {
 		return {
 			ok: false,
@@ -131,39 +177,53 @@ export function measure(input: MeasureInput): MeasureResult {
 		} else {
 			sumsBySku.set(line.sku, { facts, quantity: line.quantity, cartons: c.cartons });
 		}
-		const dims = {
-			lengthMm: packaging.lengthMm,
-			widthMm: packaging.widthMm,
-			heightMm: packaging.heightMm
-		};
-		const label = `Line ${lineIndex + 1}`;
+		// Properties spelt out: an object spread here cost V8 microseconds per piece (measured).
+		const { lengthMm, widthMm, heightMm } = packaging;
 		if (c.fullCartons > 0) {
-			cartonPieces.push({
-				...dims,
-				grossKg: facts.fullGrossExact,
-				count: c.fullCartons,
-				label: `${label}, ${range('carton', c.firstCarton, c.firstCarton + c.fullCartons - 1)}`
-			});
+			const last = c.firstCarton + c.fullCartons - 1;
+			cartonPieces.push(
+				new LinePiece(
+					lengthMm,
+					widthMm,
+					heightMm,
+					c.fullCartons,
+					m.fullGrossMg,
+					lineIndex,
+					'carton',
+					c.firstCarton,
+					last
+				)
+			);
 		}
-		if (m.remainderGross !== null) {
-			cartonPieces.push({
-				...dims,
-				grossKg: m.remainderGross.toFixed(),
-				count: 1,
-				label: `${label}, ${range('carton', c.lastCarton, c.lastCarton)} (part-filled)`
-			});
+		if (m.remainderGrossMg !== null) {
+			cartonPieces.push(
+				new LinePiece(
+					lengthMm,
+					widthMm,
+					heightMm,
+					1,
+					m.remainderGrossMg,
+					lineIndex,
+					'carton',
+					c.lastCarton,
+					c.lastCarton,
+					' (part-filled)'
+				)
+			);
 		}
 	});
 	if (problems.length > 0) return { ok: false, problems };
-	let net = ZERO;
-	let gross = ZERO;
-	let volume = ZERO;
+	let netMg: Whole = 0;
+	let grossMg: Whole = 0;
+	let mm3: Whole = 0;
 	for (const { facts, quantity, cartons } of sumsBySku.values()) {
-		const productNet = facts.netPerUnit.times(quantity);
-		net = net.plus(productNet);
-		gross = gross.plus(facts.tare.times(cartons)).plus(productNet);
-		volume = volume.plus(facts.cartonM3.times(cartons));
+		const productNet = wholeTimes(facts.netPerUnitMg, quantity);
+		netMg = wholePlus(netMg, productNet);
+		grossMg = wholePlus(wholePlus(grossMg, wholeTimes(facts.tareMg, cartons)), productNet);
+		mm3 = wholePlus(mm3, wholeTimes(facts.cartonMm3, cartons));
 	}
+	const gross = wholeToDecimal(grossMg, 6);
+	const volume = wholeToDecimal(mm3, 9);
 
 	let pallets: MeasuredPallets | null = null;
 	let pieces = cartonPieces;
@@ -172,28 +232,33 @@ export function measure(input: MeasureInput): MeasureResult {
 		const palletPieces: ChargeablePiece[] = [];
 		const planned: MeasuredPallets['lines'] = [];
 		let nextPallet = 1;
-		let palletGross = ZERO;
-		let palletVolume = ZERO;
-		const stowageBySku = new Map<string, ReturnType<typeof palletStowage>>();
-		const palletTare = exact(pallet.tareKg);
+		let palletGrossMg: Whole = 0;
+		let palletMm3: Whole = 0;
+		const stowageBySku = new Map<
+			string,
+			{ carton: PalletCarton; stowage: ReturnType<typeof palletStowage> }
+		>();
+		const palletTareMg = mgOfKg(pallet.tareKg);
 		measured.forEach((line, i) => {
-			const packaging = bySku.get(line.sku)?.packaging;
 			const m = masses[i];
-			if (packaging === undefined || packaging === null || m === undefined) return;
-			const carton = {
-				lengthMm: packaging.lengthMm,
-				widthMm: packaging.widthMm,
-				heightMm: packaging.heightMm,
-				grossKg: packaging.cartonGrossKg,
-				orientation: packaging.orientation,
-				maxLoadOnTopKg: packaging.maxLoadOnTopKg
-			};
-			// The stowage depends on the product only: searched once per product.
-			let stowage = stowageBySku.get(line.sku);
-			if (stowage === undefined) {
-				stowage = palletStowage(pallet, carton);
-				stowageBySku.set(line.sku, stowage);
+			if (m === undefined) return;
+			// The carton and its stowage depend on the product only: worked out once per product.
+			let known = stowageBySku.get(line.sku);
+			if (known === undefined) {
+				const packaging = bySku.get(line.sku)?.packaging;
+				if (packaging === undefined || packaging === null) return;
+				const carton: PalletCarton = {
+					lengthMm: packaging.lengthMm,
+					widthMm: packaging.widthMm,
+					heightMm: packaging.heightMm,
+					grossKg: packaging.cartonGrossKg,
+					orientation: packaging.orientation,
+					maxLoadOnTopKg: packaging.maxLoadOnTopKg
+				};
+				known = { carton, stowage: palletStowage(pallet, carton) };
+				stowageBySku.set(line.sku, known);
 			}
+			const { carton, stowage } = known;
 			if (!stowage.ok) {
 				problems.push({
 					path: 'pallet',
@@ -211,31 +276,35 @@ export function measure(input: MeasureInput): MeasureResult {
 				},
 				stowage.stowage,
 				{
-					cartonGross: m.fullGross,
-					lastCartonGross: m.remainderGross ?? m.fullGross,
-					palletTare
+					cartonGrossMg: m.fullGrossMg,
+					lastCartonGrossMg: m.remainderGrossMg ?? m.fullGrossMg,
+					palletTareMg
 				}
 			);
 			planned.push({ lineIndex: line.lineIndex, sku: line.sku, plan: result.plan });
 			nextPallet = result.plan.lastPallet + 1;
-			palletGross = palletGross.plus(result.exact.gross);
-			palletVolume = palletVolume.plus(result.exact.volumeM3);
-			result.exact.groups.forEach((g, k) => {
-				const group = result.plan.groups[k];
-				palletPieces.push({
-					lengthMm: pallet.lengthMm,
-					widthMm: pallet.widthMm,
-					heightMm: g.loadedHeightMm,
-					grossKg: g.grossPerPallet.toFixed(),
-					count: g.pallets,
-					label:
-						`Line ${line.lineIndex + 1}, ` +
-						(group === undefined ? 'pallets' : range('pallet', group.fromPallet, group.toPallet))
-				});
+			palletGrossMg = wholePlus(palletGrossMg, result.exact.grossMg);
+			palletMm3 = wholePlus(palletMm3, result.exact.volumeMm3);
+			result.plan.groups.forEach((g, k) => {
+				palletPieces.push(
+					new LinePiece(
+						pallet.lengthMm,
+						pallet.widthMm,
+						g.loadedHeightMm,
+						g.pallets,
+						result.exact.groupGrossMg[k] ?? 0,
+						line.lineIndex,
+						'pallet',
+						g.fromPallet,
+						g.toPallet
+					)
+				);
 			});
 		});
 		if (problems.length > 0) return { ok: false, problems };
 		const count = nextPallet - 1;
+		const palletGross = wholeToDecimal(palletGrossMg, 6);
+		const palletVolume = wholeToDecimal(palletMm3, 9);
 		pallets = {
 			pallet,
 			lines: planned,
@@ -254,9 +323,9 @@ export function measure(input: MeasureInput): MeasureResult {
 		totals: {
 			units,
 			cartons: nextCarton - 1,
-			netKg: kgOut(net),
-			grossKg: kgOut(gross),
-			volumeM3: m3Out(volume)
+			netKg: wholeFixed(netMg, 6, 3),
+			grossKg: wholeFixed(grossMg, 6, 3),
+			volumeM3: wholeFixed(mm3, 9, 6)
 		},
 		pallets,
 		chargeable: chargeableWeightsOfTotals(pieces, pieceTotals),

@@ -14,10 +14,9 @@
  *
  * Pure module: no framework imports.
  */
-import type Decimal from 'decimal.js';
 import type { PalletType } from '../reference/equipment';
 import { ORIENTATIONS, type Orientation } from './cartons';
-import { ZERO, boxM3, exact, kgOut, m3Out, show } from './exact';
+import { exact, show } from './exact';
 import { layerPattern, type LayerPattern } from './layer-pattern';
 import {
 	MESSAGES,
@@ -27,6 +26,16 @@ import {
 	isPositiveInt,
 	type Problem
 } from './problem';
+import {
+	mgOfKg,
+	wholeEquals,
+	wholeFixed,
+	wholeFloorDiv,
+	wholeMinus,
+	wholePlus,
+	wholeTimes,
+	type Whole
+} from './whole-units';
 
 export interface PalletSpec {
 	lengthMm: number;
@@ -150,11 +159,12 @@ export interface PalletPlanInput {
 
 export type PalletPlanResult = { ok: true; plan: PalletPlan } | PalletError;
 
-/** Exact figures behind a plan, for callers that go on computing (measure). */
+/** Exact figures behind a plan, for callers that go on computing (measure): mg and mm³. */
 export interface PalletPlanExact {
-	gross: Decimal;
-	volumeM3: Decimal;
-	groups: { pallets: number; loadedHeightMm: number; grossPerPallet: Decimal }[];
+	grossMg: Whole;
+	volumeMm3: Whole;
+	/** Gross of one pallet of each of the plan's groups, in the same order. */
+	groupGrossMg: Whole[];
 }
 
 function invalid(problems: Problem[]): PalletError {
@@ -252,10 +262,11 @@ export function palletStowage(
 	const problems = [...checkPallet(pallet), ...checkCarton(carton)];
 	if (problems.length > 0) return invalid(problems);
 
-	const gross = exact(carton.grossKg);
-	const room = exact(pallet.maxGrossKg).minus(pallet.tareKg);
-	const cartonsByWeight = room.dividedBy(gross).floor().toNumber();
+	const grossMg = mgOfKg(carton.grossKg);
+	const roomMg = wholeMinus(mgOfKg(pallet.maxGrossKg), mgOfKg(pallet.tareKg));
+	const cartonsByWeight = wholeFloorDiv(roomMg, grossMg);
 	if (cartonsByWeight < 1) {
+		const gross = exact(carton.grossKg);
 		return {
 			ok: false,
 			reason: 'weight',
@@ -266,9 +277,7 @@ export function palletStowage(
 		};
 	}
 	const layersByStacking =
-		carton.maxLoadOnTopKg === null
-			? 1
-			: exact(carton.maxLoadOnTopKg).dividedBy(gross).floor().plus(1).toNumber();
+		carton.maxLoadOnTopKg === null ? 1 : wholeFloorDiv(mgOfKg(carton.maxLoadOnTopKg), grossMg) + 1;
 	const clearance = pallet.maxLoadedHeightMm - pallet.deckHeightMm;
 
 	const tried: PalletStowage['tried'] = [];
@@ -339,11 +348,11 @@ export function palletStowage(
 	};
 }
 
-/** The masses a plan multiplies, already exact (kg). */
+/** The masses a plan multiplies, already exact, in whole milligrams (see whole-units.ts). */
 export interface PalletPlanMasses {
-	cartonGross: Decimal;
-	lastCartonGross: Decimal;
-	palletTare: Decimal;
+	cartonGrossMg: Whole;
+	lastCartonGrossMg: Whole;
+	palletTareMg: Whole;
 }
 
 function planExact(
@@ -354,51 +363,48 @@ function planExact(
 	const { pallet, cartons } = input;
 	const firstCarton = input.firstCarton ?? 1;
 	const firstPallet = input.firstPallet ?? 1;
-	const perPallet = stowage.cartonsPerPallet;
-	const gross = masses.cartonGross;
-	const lastGross = masses.lastCartonGross;
-	const tare = masses.palletTare;
+	const { cartonsPerPallet: perPallet, perLayer, layerHeightMm } = stowage;
+	// Once per line: whole milligrams and mm³, not decimal.js (see whole-units.ts), and each
+	// group's figures worked out once, as measure() calls this for every line.
+	const gross = masses.cartonGrossMg;
+	const lastGross = masses.lastCartonGrossMg;
+	const tare = masses.palletTareMg;
 	const pallets = Math.ceil(cartons / perPallet);
 	const lastCount = cartons - (pallets - 1) * perPallet;
-	const heightFor = (n: number): number =>
-		pallet.deckHeightMm + Math.ceil(n / stowage.perLayer) * stowage.layerHeightMm;
+	const footprintMm2 = wholeTimes(pallet.lengthMm, pallet.widthMm);
 
 	const groups: PalletGroup[] = [];
-	const exactGroups: PalletPlanExact['groups'] = [];
-	const add = (from: number, count: number, each: number, grossEach: Decimal): void => {
+	const groupGrossMg: Whole[] = [];
+	let total: Whole = 0;
+	let volume: Whole = 0;
+	const add = (from: number, count: number, each: number, grossEach: Whole): void => {
 		const firstOfGroup = firstCarton + (from - firstPallet) * perPallet;
+		const layers = Math.ceil(each / perLayer);
+		const loadedHeightMm = pallet.deckHeightMm + layers * layerHeightMm;
 		groups.push({
 			fromPallet: from,
 			toPallet: from + count - 1,
 			pallets: count,
 			cartonsPerPallet: each,
-			layers: Math.ceil(each / stowage.perLayer),
-			loadedHeightMm: heightFor(each),
-			grossKgPerPallet: kgOut(grossEach),
+			layers,
+			loadedHeightMm,
+			grossKgPerPallet: wholeFixed(grossEach, 6, 3),
 			firstCarton: firstOfGroup,
 			lastCarton: firstOfGroup + count * each - 1
 		});
-		exactGroups.push({
-			pallets: count,
-			loadedHeightMm: heightFor(each),
-			grossPerPallet: grossEach
-		});
+		groupGrossMg.push(grossEach);
+		total = wholePlus(total, wholeTimes(grossEach, count));
+		volume = wholePlus(volume, wholeTimes(wholeTimes(footprintMm2, loadedHeightMm), count));
 	};
-	const fullGross = tare.plus(gross.times(perPallet));
-	const lastPalletGross = tare.plus(gross.times(lastCount - 1)).plus(lastGross);
-	if (lastCount === perPallet && lastGross.equals(gross)) {
+	const fullGross = wholePlus(tare, wholeTimes(gross, perPallet));
+	if (lastCount === perPallet && wholeEquals(lastGross, gross)) {
 		add(firstPallet, pallets, perPallet, fullGross);
 	} else {
 		if (pallets > 1) add(firstPallet, pallets - 1, perPallet, fullGross);
+		const lastPalletGross = wholePlus(wholePlus(tare, wholeTimes(gross, lastCount - 1)), lastGross);
 		add(firstPallet + pallets - 1, 1, lastCount, lastPalletGross);
 	}
 
-	let total = ZERO;
-	let volume = ZERO;
-	for (const g of exactGroups) {
-		total = total.plus(g.grossPerPallet.times(g.pallets));
-		volume = volume.plus(boxM3(pallet.lengthMm, pallet.widthMm, g.loadedHeightMm).times(g.pallets));
-	}
 	const partPallets = lastCount < perPallet ? 1 : 0;
 	return {
 		plan: {
@@ -410,10 +416,10 @@ function planExact(
 			firstPallet,
 			lastPallet: firstPallet + pallets - 1,
 			groups,
-			grossKg: kgOut(total),
-			volumeM3: m3Out(volume)
+			grossKg: wholeFixed(total, 6, 3),
+			volumeM3: wholeFixed(volume, 9, 6)
 		},
-		exact: { gross: total, volumeM3: volume, groups: exactGroups }
+		exact: { grossMg: total, volumeMm3: volume, groupGrossMg }
 	};
 }
 
@@ -463,9 +469,9 @@ export function planPalletsWithStowage(
 	if (problems.length > 0) return invalid(problems);
 	if (!stowage.ok) return stowage;
 	const masses = {
-		cartonGross: exact(input.carton.grossKg),
-		lastCartonGross: exact(input.lastCartonGrossKg ?? input.carton.grossKg),
-		palletTare: exact(input.pallet.tareKg)
+		cartonGrossMg: mgOfKg(input.carton.grossKg),
+		lastCartonGrossMg: mgOfKg(input.lastCartonGrossKg ?? input.carton.grossKg),
+		palletTareMg: mgOfKg(input.pallet.tareKg)
 	};
 	return { ok: true, ...planExact(input, stowage.stowage, masses) };
 }
