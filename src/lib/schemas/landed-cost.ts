@@ -115,3 +115,21 @@ export const roundingRulesSchema = z.object({
 
 /** landed_cost_settings.brokerage: destination country → the broker's charges there. */
 export const brokerageSchema = z.record(z.string().regex(/^[A-Z]{2}$/), z.array(chargeSchema));
+
+/** GET /api/v1/shipments/{id}/landed-cost query. */
+export const landedCostQuerySchema = z.object({
+	mode: z.enum(['air', 'sea_fcl', 'sea_lcl', 'road', 'courier'], {
+		error: 'mode: one of air, sea_fcl, sea_lcl, road, courier.'
+	}),
+	date: z
+		.string()
+		.regex(/^\d{4}-\d{2}-\d{2}$/, 'date: YYYY-MM-DD.')
+		.optional(),
+	allocation: z.enum(['weight', 'value']).optional(),
+	preferenceClaimed: z
+		.enum(['true', 'false'])
+		.transform((v) => v === 'true')
+		.optional(),
+	carryingRatePercent: decimal('carryingRatePercent').optional(),
+	reportCurrency: currency.optional()
+});
