@@ -29,9 +29,16 @@ export function dec(value: string | number | Decimal): Decimal {
 	return new Exact(value);
 }
 
+const digitsCache = new Map<string, number>();
+
 /** Minor-unit digits of a currency; 2 for an unknown code (validation reports those first). */
 export function digits(currency: string): number {
-	return minorUnits(currency) ?? 2;
+	let d = digitsCache.get(currency);
+	if (d === undefined) {
+		d = minorUnits(currency) ?? 2;
+		digitsCache.set(currency, d);
+	}
+	return d;
 }
 
 /** `value` half-up to the currency's minor unit (ISO 4217 via currency-codes). */
@@ -63,7 +70,14 @@ export function inForce(row: Pick<ReferenceRow, 'validFrom' | 'validTo'>, date: 
 	return row.validFrom <= date && (row.validTo === null || date <= row.validTo);
 }
 
-/** Percent string → fraction: '10' → 0.1. */
+const percentCache = new Map<string, Decimal>();
+
+/** Percent string → fraction: '10' → 0.1 (cached: a shipment repeats the same few rates). */
 export function percent(value: string): Decimal {
-	return new Exact(value).dividedBy(HUNDRED);
+	let p = percentCache.get(value);
+	if (p === undefined) {
+		p = new Exact(value).dividedBy(HUNDRED);
+		if (percentCache.size < 1000) percentCache.set(value, p);
+	}
+	return p;
 }

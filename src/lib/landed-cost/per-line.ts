@@ -1,10 +1,11 @@
 /**
  * Per-line shares of every component in the report currency (largest remainder, so each column
- * adds up to its component exactly) and the per-unit split of each line's total.
+ * adds up to its component exactly) and the per-unit split of each line's total. Works in whole
+ * minor units (BigInt) so that 500 lines × 9 columns stay cheap.
  */
 import type Decimal from 'decimal.js';
-import { allocateLargestRemainder, splitOverUnits } from './allocate';
-import { ZERO, digits, money } from './decimal';
+import { allocateUnits, formatUnits, splitUnits, toUnits } from './allocate';
+import { digits } from './decimal';
 import { COST_KEYS, type Amount, type CostKey, type LandedCostLine, type LineCost } from './types';
 
 /** For each component: its report-currency total and the weights to share it by. */
@@ -18,17 +19,17 @@ export function perLine(
 	currency: string
 ): LineCost[] {
 	const minor = digits(currency);
-	const columns = {} as Record<CostKey, Decimal[]>;
+	const columns = {} as Record<CostKey, bigint[]>;
 	for (const key of COST_KEYS) {
-		columns[key] = allocateLargestRemainder(shares[key].total, shares[key].weights, minor);
+		columns[key] = allocateUnits(toUnits(shares[key].total, minor), shares[key].weights);
 	}
 	return lines.map((line, i) => {
 		const lineShares = {} as Record<CostKey, string>;
-		let total = ZERO;
+		let total = 0n;
 		for (const key of COST_KEYS) {
 			const v = columns[key][i]!;
-			lineShares[key] = money(v, currency);
-			total = total.plus(v);
+			lineShares[key] = formatUnits(v, minor);
+			total += v;
 		}
 		return {
 			ref: line.ref,
@@ -38,9 +39,9 @@ export function perLine(
 			tariffRowId: tariffRowIds[i]!,
 			customsValue: customsValues[i]!,
 			shares: lineShares,
-			total: money(total, currency),
-			perUnit: splitOverUnits(total, line.quantity, minor).map((s) => ({
-				amount: money(s.amount, currency),
+			total: formatUnits(total, minor),
+			perUnit: splitUnits(total, line.quantity).map((s) => ({
+				amount: formatUnits(s.amount, minor),
 				units: s.units
 			}))
 		};
