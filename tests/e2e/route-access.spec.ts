@@ -256,6 +256,12 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			}
 		]
 	},
+	'/shipments/[shipmentId=uuid]/landed-cost': {
+		page: [
+			{ method: 'GET', path: '/shipments/:ship/landed-cost', expect: STAFF_PAGE },
+			{ method: 'GET', path: '/shipments/:otherShip/landed-cost', expect: STAFF_PAGE }
+		]
+	},
 	'/shipments/[shipmentId=uuid]/papers/[documentId=uuid]': {
 		api: [
 			{
@@ -370,6 +376,20 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 	'/api/v1/shipments/[shipmentId=uuid]/documents.zip': {
 		api: [
 			{ method: 'GET', path: '/api/v1/shipments/:cedar/documents.zip', expect: OTHER_SHIPMENT_API }
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/landed-cost': {
+		api: [
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:ship/landed-cost?mode=sea_lcl',
+				expect: { anonymous: 401, broker: 403, customer: 403, default: 200 }
+			},
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:ship/landed-cost?mode=rocket',
+				expect: { anonymous: 401, broker: 403, customer: 403, default: 400 }
+			}
 		]
 	},
 	'/api/v1/shipments/[shipmentId=uuid]/load-plan': {
