@@ -12,6 +12,7 @@ describe('OpenAPI document', () => {
 				'/shipments/{shipmentId}',
 				'/shipments/{shipmentId}/measure',
 				'/shipments/{shipmentId}/documents',
+				'/shipments/{shipmentId}/landed-cost',
 				'/shipments/{shipmentId}/documents/{documentId}',
 				'/shipments/{shipmentId}/documents.zip',
 				'/calc/measure'

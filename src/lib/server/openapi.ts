@@ -8,6 +8,7 @@ import {
 	loadPlanSchema
 } from '../schemas/load-plan';
 import { issuePapersSchema } from '../schemas/documents';
+import { landedCostQuerySchema } from '../schemas/landed-cost';
 import { productSchema } from '../schemas/products';
 import { shipmentLinesSchema, shipmentListQuerySchema, shipmentSchema } from '../schemas/shipments';
 
@@ -98,6 +99,18 @@ export function openApiDocument(origin: string) {
 						...errors,
 						503: error
 					}
+				}
+			},
+			'/shipments/{shipmentId}/landed-cost': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Landed cost of the shipment for one mode (staff)',
+					description:
+						'Goods, origin charges, freight (rate card of the lane), insurance, duty (longest HS prefix of the destination tariff, preferential when `preferenceClaimed`), import VAT/GST, customs fees, brokerage and destination charges, each with who bears it under the Incoterms rule; totals, per line and per unit (largest-remainder shares that add back exactly), transit days, carrying cost, kg CO2e, the data rows used with their dates, cautions and a trail of every figure with its formula and source. Full-container freight uses the load plan (computed when not cached). 422: data is missing or expired, with `issues` naming each gap. An estimate, not a customs ruling.',
+					parameters: Object.entries(
+						(schema(landedCostQuerySchema) as { properties: Record<string, object> }).properties
+					).map(([name, s]) => ({ name, in: 'query', required: name === 'mode', schema: s })),
+					responses: { 200: ok('The landed cost'), ...errors, 422: error }
 				}
 			},
 			'/shipments/{shipmentId}/documents': {
