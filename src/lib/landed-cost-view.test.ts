@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bestModes, comparisonCsv } from './landed-cost-view';
+import { bestModes, comparisonCsv, groupDigits } from './landed-cost-view';
 import type { LandedCostOk } from './landed-cost/types';
 
 // Invented figures, for the view logic only.
@@ -40,5 +40,12 @@ describe('landed-cost view', () => {
 		expect(lines[0]).toBe('Shipment,Figure,Currency,"Air, express"');
 		expect(lines).toContain('SHP-2026-00001,Total,USD,100.10');
 		expect(lines.at(-1)).toBe('SHP-2026-00001,Emissions (kg CO2e),,12.5');
+	});
+
+	it('groups digits without touching the decimals', () => {
+		expect(groupDigits('1234567.5')).toBe('1,234,567.5');
+		expect(groupDigits('-1000')).toBe('-1,000');
+		expect(groupDigits('999.12345')).toBe('999.12345');
+		expect(groupDigits('n/a')).toBe('n/a');
 	});
 });

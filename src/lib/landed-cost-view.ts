@@ -63,3 +63,10 @@ export function comparisonCsv(
 	];
 	return [head, ...rows].map((row) => row.map(csvCell).join(',')).join('\r\n') + '\r\n';
 }
+
+/** '1234567.5' → '1,234,567.5': thousands separators on an exact decimal string, for display. */
+export function groupDigits(value: string): string {
+	const m = /^(-?)(\d+)(\.\d+)?$/.exec(value);
+	if (!m) return value;
+	return m[1] + m[2]!.replace(/\B(?=(\d{3})+(?!\d))/g, ',') + (m[3] ?? '');
+}

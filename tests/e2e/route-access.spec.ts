@@ -260,6 +260,24 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 		page: [
 			{ method: 'GET', path: '/shipments/:ship/landed-cost', expect: STAFF_PAGE },
 			{ method: 'GET', path: '/shipments/:otherShip/landed-cost', expect: STAFF_PAGE }
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/shipments/:ship/landed-cost?/saveScenario',
+				form: { name: '' },
+				expect: { anonymous: 303, broker: 403, customer: 403, default: 400 }
+			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/landed-cost/scenarios/[scenarioId=uuid]': {
+		// No such scenario: staff get a 404; the others never reach the lookup.
+		page: [
+			{
+				method: 'GET',
+				path: '/shipments/:ship/landed-cost/scenarios/00000000-0000-4000-8000-000000000000',
+				expect: { anonymous: 303, broker: 403, customer: 403, default: 404 }
+			}
 		]
 	},
 	'/shipments/[shipmentId=uuid]/papers/[documentId=uuid]': {

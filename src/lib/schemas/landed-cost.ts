@@ -133,3 +133,19 @@ export const landedCostQuerySchema = z.object({
 	carryingRatePercent: decimal('carryingRatePercent').optional(),
 	reportCurrency: currency.optional()
 });
+
+/** Saving the comparison as a named scenario (the page's assumptions and modes). */
+export const saveScenarioSchema = z.object({
+	name: z
+		.string()
+		.trim()
+		.min(1, 'Give the scenario a name.')
+		.max(100, 'Keep the name to 100 characters.'),
+	modes: z
+		.array(z.enum(['air', 'sea_fcl', 'sea_lcl', 'road', 'courier']))
+		.min(1, 'Choose at least one mode.'),
+	date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'A date as YYYY-MM-DD.'),
+	allocation: z.enum(['weight', 'value']),
+	preferenceClaimed: z.boolean().default(false),
+	carryingRatePercent: decimal('Cost of money in transit')
+});
