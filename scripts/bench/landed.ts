@@ -1,14 +1,11 @@
-// npm run bench:landed — the landed-cost engine on a 500-line shipment (invented data), for four
-// modes (air, sea FCL, sea LCL, road), run N times after warm-up runs. Part A (in process) prints
-// p50/p95/max per mode against the 50 ms target, PASS/OVER and the ratio. A benchmark, not a
-// test: it prints figures and never fails CI.
+// Part A of npm run bench:landed (scripts/bench/landed.sh runs it, then Part B over HTTP) — the
+// landed-cost engine on a 500-line shipment (invented data), for four modes (air, sea FCL, sea
+// LCL, road), run N times after warm-up runs. Prints p50/p95/max per mode against the 50 ms
+// target, PASS/OVER and the ratio. A benchmark, not a test: it prints figures and never fails CI.
 //
 // Options (argument or environment variable):
 //   --runs=N     BENCH_LANDED_RUNS   default 50
 //   --lines=N    BENCH_LANDED_LINES  default 500
-//
-// TODO(lead): Part B — API throughput of the landed-cost route under /api/v1 against a no-op
-// route (autocannon, as scripts/bench/load.ts does), once that route exists.
 import os from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { landedCost } from '../../src/lib/landed-cost';
@@ -144,6 +141,4 @@ for (const [mode, card] of Object.entries(cards) as [TransportMode, RateCard][])
 		`| ${mode} | ${ms(coldMs)} | ${ms(s.p50)} | ${ms(s.p95)} | ${ms(s.max)} | ${TARGET_MS} ms | ${ratio.toFixed(2)} | ${verdict} | ${first.trail.length} |`
 	);
 }
-console.log('');
-console.log('Part B (API throughput against a no-op route): not yet; see the TODO in this file.');
 process.exit(0);

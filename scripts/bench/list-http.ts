@@ -1,45 +1,16 @@
 // Part B (HTTP): the shipments list and the measure API of a running `node build`, on loopback.
 // Usage: BENCH_BASE=http://127.0.0.1:4395 tsx scripts/bench/list-http.ts
-// Latencies are recorded per response (autocannon's 'response' event) and p95 is computed
-// exactly from them (nearest rank), not read off autocannon's histogram.
-import autocannon, { type Options, type Result } from 'autocannon';
+// Latencies per response and exact p95: see http.ts.
 import { benchInput } from './measure-input';
-import { ms, recordResult, summarize } from './stats';
+import { benchBase, run as runAt, signIn, type Run } from './http';
+import { recordResult } from './stats';
 
-const base = process.env.BENCH_BASE ?? 'http://127.0.0.1:4395';
-if (new URL(base).hostname !== '127.0.0.1') {
-	console.error(`BENCH_BASE must be on 127.0.0.1 (got ${base})`);
-	process.exit(2);
-}
+const base = benchBase('http://127.0.0.1:4395');
 const EMAIL = process.env.BENCH_EMAIL ?? 'coordinator@solvrae.example';
 const PASSWORD = process.env.BENCH_PASSWORD ?? 'Landfall-demo-2026';
 const DURATION_S = Math.min(Math.max(Number(process.env.BENCH_DURATION ?? 10) || 10, 1), 30);
-const MAX_REQUESTS = 20_000; // hard cap per run, whatever the duration
 const LIST_TARGET_MS = 150;
 const MEASURE_TARGET_MS = 20;
-
-async function signIn(): Promise<string> {
-	const response = await fetch(`${base}/signin`, {
-		method: 'POST',
-		redirect: 'manual',
-		headers: {
-			origin: base,
-			accept: 'application/json',
-			'content-type': 'application/x-www-form-urlencoded'
-		},
-		body: new URLSearchParams({ email: EMAIL, password: PASSWORD }),
-		signal: AbortSignal.timeout(15_000)
-	});
-	const body = await response.text();
-	const cookies = response.headers
-		.getSetCookie()
-		.map((c) => c.split(';')[0]!)
-		.filter((c) => c.startsWith('authjs.session-token'));
-	if (response.status !== 200 || !body.includes('redirect') || cookies.length === 0) {
-		throw new Error(`sign-in of ${EMAIL} failed: HTTP ${response.status} ${body.slice(0, 200)}`);
-	}
-	return cookies.join('; ');
-}
 
 async function get(path: string, cookie: string) {
 	const response = await fetch(`${base}${path}`, {
@@ -50,44 +21,9 @@ async function get(path: string, cookie: string) {
 	return { status: response.status, text: await response.text() };
 }
 
-interface Run {
-	name: string;
-	options: Omit<Options, 'url'> & { path: string };
-}
+const run = (r: Run) => runAt(base, r);
 
-async function run({ name, options }: Run) {
-	const { path, ...rest } = options;
-	const latencies: number[] = [];
-	const statuses = new Map<number, number>();
-	const result = await new Promise<Result>((resolve, reject) => {
-		const instance = autocannon(
-			{ url: `${base}${path}`, timeout: 10, maxOverallRequests: MAX_REQUESTS, ...rest },
-			(error, r) => (error ? reject(error) : resolve(r))
-		);
-		instance.on('response', (_client, statusCode, _bytes, responseTimeMs) => {
-			latencies.push(responseTimeMs);
-			statuses.set(statusCode, (statuses.get(statusCode) ?? 0) + 1);
-		});
-	});
-	const s = summarize(latencies);
-	const codes = [...statuses].map(([code, n]) => `${code}×${n}`).join(' ');
-	console.log(`\n  ${name}`);
-	console.log(
-		`    ${rest.method ?? 'GET'} ${path}: ${rest.connections} connection(s), ` +
-			`${result.duration} s, ${s.n} responses (${codes || 'none'})`
-	);
-	console.log(
-		`    requests/s ${(s.n / result.duration).toFixed(1)}   p50 ${ms(s.p50)}   p95 ${ms(s.p95)}` +
-			`   p99 ${ms(s.p99)}   max ${ms(s.max)}   mean ${ms(s.mean)}`
-	);
-	console.log(
-		`    non-2xx ${result.non2xx}   errors ${result.errors}   timeouts ${result.timeouts}` +
-			`   (autocannon histogram: p90 ${result.latency.p90} ms, p97.5 ${result.latency.p97_5} ms)`
-	);
-	return { ...s, non2xx: result.non2xx, errors: result.errors + result.timeouts };
-}
-
-const cookie = await signIn();
+const cookie = await signIn(base, EMAIL, PASSWORD);
 console.log(`Part B: HTTP on ${base}, signed in as ${EMAIL}`);
 
 const LIST = '/shipments';

@@ -30,21 +30,12 @@ BASE=http://$APP_HOST:$APP_PORT
 WORK=$(mktemp -d "${TMPDIR:-/tmp}/landfall-bench.XXXXXX")
 export BENCH_RESULTS=$WORK/results.tsv
 : >"$BENCH_RESULTS"
-APP_PID=""
-CLUSTER_STARTED=0
+# shellcheck source=scripts/bench/app.sh
+source scripts/bench/app.sh
 
 cleanup() {
 	local code=$?
-	if [[ -n $APP_PID ]] && kill -0 "$APP_PID" 2>/dev/null; then
-		kill "$APP_PID" 2>/dev/null || true
-		for _ in 1 2 3 4 5 6 7 8 9 10; do
-			kill -0 "$APP_PID" 2>/dev/null || break
-			sleep 0.5
-		done
-		kill -9 "$APP_PID" 2>/dev/null || true
-		wait "$APP_PID" 2>/dev/null || true
-	fi
-	if ((CLUSTER_STARTED)); then bash scripts/pg.sh stop || true; fi
+	bench_stop
 	rm -rf -- "$WORK"
 	exit "$code"
 }
@@ -74,18 +65,12 @@ fi
 
 # --- Part B ----------------------------------------------------------------------------------
 if [[ $PARTS != a ]]; then
-	if timeout 2 bash -c ": <>/dev/tcp/$APP_HOST/$APP_PORT" 2>/dev/null; then
+	if bench_port_in_use; then
 		echo "port $APP_PORT on $APP_HOST is in use; stop what listens there first" >&2
 		exit 1
 	fi
 
-	say "Part B: fresh PostgreSQL cluster '$LANDFALL_PG_NAME' on port $LANDFALL_PG_PORT"
-	CLUSTER_STARTED=1
-	bash scripts/pg.sh reset
-	DATABASE_URL=$(bash scripts/pg.sh url)
-	export DATABASE_URL
-	"$TSX" scripts/migrate.ts
-	"$TSX" scripts/seed.ts
+	bench_fresh_cluster
 
 	say "Inserting 10,000 shipments (3 lines each)"
 	t0=$SECONDS
@@ -100,37 +85,14 @@ if [[ $PARTS != a ]]; then
 		bash scripts/pg.sh psql -X -q -v ON_ERROR_STOP=1 -f "$BENCH_EXTRA_SQL"
 	fi
 
-	if [[ ! -f build/index.js ]] || [[ -n $(find src static data svelte.config.js vite.config.ts \
-		package-lock.json -newer build/index.js -type f -print -quit) ]]; then
-		say "Building the app (build/ is missing or older than its sources)"
-		node_modules/.bin/vite build --logLevel error
-	fi
-
-	say "Starting node build on $BASE"
-	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL \
-		AUTH_SECRET=bench-secret-0123456789abcdefghij NODE_ENV=production \
-		node ${BENCH_NODE_ARGS:-} build >"$WORK/app.log" 2>&1 &
-	APP_PID=$!
-	for ((i = 0; i < 120; i++)); do
-		curl -fsS --max-time 2 "$BASE/api/health" >/dev/null 2>&1 && break
-		kill -0 "$APP_PID" 2>/dev/null || break
-		sleep 0.5
-	done
-	if ! curl -fsS --max-time 2 "$BASE/api/health" >/dev/null 2>&1; then
-		echo "the app did not become healthy; its log:" >&2
-		tail -n 40 "$WORK/app.log" >&2 || true
-		exit 1
-	fi
+	bench_start_app "${BENCH_NODE_ARGS:-}" || exit 1
 
 	BENCH_BASE=$BASE "$TSX" scripts/bench/list-http.ts
 
 	say "EXPLAIN ANALYZE of the list queries (after the load, so the cache is warm)"
 	bash scripts/pg.sh psql -X -q -v ON_ERROR_STOP=1 -f scripts/bench/explain.sql
 
-	if grep -qiE 'error|warn' "$WORK/app.log"; then
-		echo "--- app log (errors or warnings) ---"
-		grep -iE -m 20 'error|warn' "$WORK/app.log" || true
-	fi
+	bench_app_log
 fi
 
 # --- Summary ---------------------------------------------------------------------------------

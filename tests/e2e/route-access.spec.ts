@@ -343,6 +343,16 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			}
 		]
 	},
+	'/api/v1/calc/landed-cost': {
+		api: [
+			{
+				method: 'POST',
+				path: '/api/v1/calc/landed-cost',
+				body: {},
+				expect: { anonymous: 401, broker: 403, customer: 403, default: 400 }
+			}
+		]
+	},
 	'/api/v1/calc/load-plan': {
 		api: [
 			{

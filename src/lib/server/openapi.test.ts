@@ -15,7 +15,8 @@ describe('OpenAPI document', () => {
 				'/shipments/{shipmentId}/landed-cost',
 				'/shipments/{shipmentId}/documents/{documentId}',
 				'/shipments/{shipmentId}/documents.zip',
-				'/calc/measure'
+				'/calc/measure',
+				'/calc/landed-cost'
 			])
 		);
 	});
@@ -31,5 +32,10 @@ describe('OpenAPI document', () => {
 		const measure = doc.components.schemas.MeasureInput as { properties: Record<string, unknown> };
 		expect(Object.keys(measure.properties)).toEqual(expect.arrayContaining(['products', 'lines']));
 		expect(JSON.stringify(doc)).toContain('Whole millimetres');
+		const landed = doc.components.schemas.LandedCostInput as {
+			properties: Record<string, unknown>;
+			required: string[];
+		};
+		expect(landed.required).toEqual(expect.arrayContaining(['lines', 'rateCard', 'tariffRows']));
 	});
 });

@@ -9,6 +9,7 @@ import {
 } from '../schemas/load-plan';
 import { issuePapersSchema } from '../schemas/documents';
 import { landedCostQuerySchema } from '../schemas/landed-cost';
+import { CALC_MAX_LINES, landedCostInputSchema } from '../schemas/landed-cost-input';
 import { productSchema } from '../schemas/products';
 import { shipmentLinesSchema, shipmentListQuerySchema, shipmentSchema } from '../schemas/shipments';
 
@@ -162,6 +163,15 @@ export function openApiDocument(origin: string) {
 					responses: { 200: ok('Load plan', 'LoadPlan'), ...errors, 503: error }
 				}
 			},
+			'/calc/landed-cost': {
+				post: {
+					summary:
+						'Landed cost of given lines, measures and reference rows (staff; nothing stored)',
+					description: `The engine's whole input: the same figures as \`GET /shipments/{shipmentId}/landed-cost\` when given the input that route gathers (lines, measures, rate card, tariff rows, country rules, exchange rates, insurance, brokerage, emission factor). At most ${CALC_MAX_LINES} lines. 400: malformed input, with \`issues\` naming each field (\`lines.3.unitPrice\`); 422: data missing, not valid on \`date\` or not matching the mode, with \`issues\` as the engine reports them. An estimate, not a customs ruling.`,
+					requestBody: body('LandedCostInput'),
+					responses: { 200: ok('The landed cost'), ...errors, 422: error }
+				}
+			},
 			'/calc/measure': {
 				post: {
 					summary: 'Measure products and lines without storing anything',
@@ -209,6 +219,7 @@ export function openApiDocument(origin: string) {
 				MeasureResult: schema(measureResultSchema),
 				LoadPlanInput: schema(loadPlanInputSchema),
 				LoadPlan: schema(loadPlanSchema),
+				LandedCostInput: schema(landedCostInputSchema),
 				Product: schema(productSchema),
 				IssuePapers: schema(issuePapersSchema),
 				CreateUser: schema(createUserSchema),
