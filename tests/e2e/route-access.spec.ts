@@ -29,6 +29,10 @@ const READ_PRODUCTS: Expect = { anonymous: 303, customer: 403, default: 200 };
 const OTHER_SHIPMENT_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
 const OTHER_SHIPMENT_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
 
+/** Landed-cost reference data: finance and admins edit, coordinators read. */
+const REFDATA_PAGE: Expect = { anonymous: 303, broker: 403, customer: 403, default: 200 };
+const REFDATA_ACTION: Expect = { anonymous: 303, admin: 400, finance: 400, default: 403 };
+
 const LIFECYCLE = ['retire', 'reinstate', 'remove'] as const;
 
 interface Probe {
@@ -186,6 +190,26 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/equipment/container-types/:container',
 				form: { code: '' },
 				expect: EDITOR_ACTION
+			}
+		]
+	},
+	'/reference/exchange-rates': {
+		page: [
+			{ method: 'GET', path: '/reference/exchange-rates', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/exchange-rates?pair=USD-EUR', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/exchange-rates?/add',
+				form: { base: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/exchange-rates?/import',
+				form: { source: '' },
+				expect: REFDATA_ACTION
 			}
 		]
 	},
