@@ -41,7 +41,7 @@ interface Probe {
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
 	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :cedar
 	 * (Cedarpoint's, papers issued, no broker) and :cedarDoc (its first paper); :place,
-	 * :party, :pallet and :container (the first listed).
+	 * :party, :pallet, :container and :tariff (the first listed).
 	 */
 	path: string;
 	expect: Expect;
@@ -209,6 +209,32 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				method: 'POST',
 				path: '/reference/exchange-rates?/import',
 				form: { source: '' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/tariffs': {
+		page: [
+			{ method: 'GET', path: '/reference/tariffs', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/tariffs?destination=AU', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{ method: 'POST', path: '/reference/tariffs', form: { hsPrefix: '' }, expect: REFDATA_ACTION }
+		]
+	},
+	'/reference/tariffs/[tariffId=uuid]': {
+		page: [{ method: 'GET', path: '/reference/tariffs/:tariff', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/tariffs/:tariff?/save',
+				form: { hsPrefix: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/tariffs/:tariff?/retire',
+				form: { validTo: 'x' },
 				expect: REFDATA_ACTION
 			}
 		]
@@ -484,6 +510,7 @@ test.describe('access per role', () => {
 		party: '',
 		pallet: '',
 		container: '',
+		tariff: '',
 		ship: '',
 		otherShip: '',
 		cedar: '',
@@ -537,6 +564,7 @@ test.describe('access per role', () => {
 		ids.party = await firstId('/parties', '/parties');
 		ids.pallet = await firstId('/equipment', '/equipment/pallet-types');
 		ids.container = await firstId('/equipment', '/equipment/container-types');
+		ids.tariff = await firstId('/reference/tariffs', '/reference/tariffs');
 	});
 
 	test.afterAll(async () => {
@@ -566,7 +594,8 @@ test.describe('access per role', () => {
 					.replace(':place', ids.place)
 					.replace(':party', ids.party)
 					.replace(':pallet', ids.pallet)
-					.replace(':container', ids.container);
+					.replace(':container', ids.container)
+					.replace(':tariff', ids.tariff);
 				const response = await client.fetch(url, {
 					method: probe.method,
 					maxRedirects: 0,

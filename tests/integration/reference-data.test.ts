@@ -1,14 +1,24 @@
 // Finance's landed-cost reference data: exchange rates added one by one or imported all or none.
 import { afterAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
-import { exchangeRateImportSchema, exchangeRateSchema } from '$lib/schemas/reference-data';
+import {
+	exchangeRateImportSchema,
+	exchangeRateSchema,
+	tariffSchema
+} from '$lib/schemas/reference-data';
+import {
+	getTariff,
+	retireTariff,
+	saveTariff,
+	tariffFormValues
+} from '$lib/server/services/reference-data/tariffs';
 import { Place } from '$lib/server/db/models';
 import {
 	addExchangeRate,
 	importExchangeRates,
 	listExchangeRates
 } from '$lib/server/services/reference-data/exchange-rates';
-import { exchangeRates } from '$lib/server/services/landed-cost/reference';
+import { exchangeRates, tariffRows } from '$lib/server/services/landed-cost/reference';
 import { sessionUserFor } from './db';
 
 // A pair and a year no seed or other test uses, so parallel runs do not meet.
@@ -98,5 +108,56 @@ describe('exchange rates', () => {
 			{ type: QueryTypes.SELECT }
 		);
 		expect(audit?.after.count).toBe(3);
+	});
+});
+
+describe('tariff rows', () => {
+	const prefix = `9${Math.floor(Math.random() * 1e8)}`.slice(0, 9);
+	afterAll(async () => {
+		await db().query(`DELETE FROM tariff_rows WHERE hs_prefix = :prefix`, {
+			replacements: { prefix }
+		});
+	});
+
+	it('adds, edits with optimistic versions, and retires a row', async () => {
+		const finance = await sessionUserFor('finance@solvrae.example');
+		const input = tariffSchema.parse({
+			destinationCountry: 'AU',
+			hsPrefix: prefix,
+			dutyKind: 'compound',
+			ratePercent: '3',
+			amount: '0.25',
+			per: 'kg',
+			currency: 'AUD',
+			agreement: 'TEST-FTA',
+			originCountries: 'my, sg',
+			source: 'Test schedule',
+			validFrom: '2026-01-01'
+		});
+		const added = await saveTariff(finance, null, input, null);
+		expect(added.ok).toBe(true);
+		const id = added.ok ? added.value.id : '';
+		const stored = await getTariff(id);
+		expect(stored).toMatchObject({
+			originCountries: ['MY', 'SG'],
+			duty: { kind: 'compound', ratePercent: '3', amount: '0.25', per: 'kg', currency: 'AUD' },
+			version: 0
+		});
+		// The engine's lookup reads it back in its own shape.
+		const forEngine = (await tariffRows('AU', '2026-06-01')).find((t) => t.id === id);
+		expect(forEngine?.originCountries).toEqual(['MY', 'SG']);
+
+		const edit = { ...tariffFormValues(stored!), ratePercent: '2.5' };
+		expect((await saveTariff(finance, id, tariffSchema.parse(edit), null)).ok).toBe(true);
+		// A second save from the same page (version 0) is stale.
+		expect(await saveTariff(finance, id, tariffSchema.parse(edit), null)).toMatchObject({
+			status: 409
+		});
+		expect(await retireTariff(finance, id, 1, '2025-12-31', null)).toMatchObject({
+			status: 400,
+			fieldErrors: { validTo: expect.stringContaining('2026-01-01') }
+		});
+		expect((await retireTariff(finance, id, 1, '2026-12-31', null)).ok).toBe(true);
+		expect(await getTariff(id)).toMatchObject({ validTo: '2026-12-31', version: 2 });
 	});
 });
