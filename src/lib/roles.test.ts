@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { ROLES, isRole, isStaff, navigationFor } from './roles';
+import { ROLES, canEditReferenceData, isRole, isStaff, navigationFor } from './roles';
 
 describe('roles', () => {
 	it('recognises exactly the five roles', () => {
@@ -22,5 +22,14 @@ describe('roles', () => {
 			expect(hrefs.some((h) => h.startsWith('/admin'))).toBe(false);
 		}
 		expect(navigationFor('admin', id).map((i) => i.href)).toContain('/admin/users');
+	});
+
+	it('gives finance and administrators the landed-cost data, and only they edit it', () => {
+		const id = '00000000-0000-4000-8000-000000000001';
+		const withEntry = ROLES.filter((role) =>
+			navigationFor(role, id).some((i) => i.href === '/reference/exchange-rates')
+		);
+		expect(withEntry).toEqual(['admin', 'finance']);
+		expect(ROLES.filter(canEditReferenceData)).toEqual(['admin', 'finance']);
 	});
 });

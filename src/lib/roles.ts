@@ -47,6 +47,18 @@ export function canEditMasterData(role: Role): boolean {
 	return role === 'admin' || role === 'coordinator';
 }
 
+/** Who changes the landed-cost reference data (rates, tariffs, settings); coordinators read it. */
+export function canEditReferenceData(role: Role): boolean {
+	return role === 'admin' || role === 'finance';
+}
+
+export const REFERENCE_DATA_READERS = [
+	'admin',
+	'finance',
+	'coordinator'
+] as const satisfies readonly Role[];
+export const REFERENCE_DATA_EDITORS = ['admin', 'finance'] as const satisfies readonly Role[];
+
 export interface NavItem {
 	href: string;
 	label: string;
@@ -60,6 +72,7 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 	const trace = { href: '/trace', label: 'Trace a serial' };
 	const equipment = { href: '/equipment', label: 'Pallets & containers' };
 	const places = { href: '/places', label: 'Places & parties' };
+	const referenceData = { href: '/reference/exchange-rates', label: 'Landed-cost data' };
 	switch (role) {
 		case 'admin':
 			return [
@@ -68,6 +81,7 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 				products,
 				places,
 				equipment,
+				referenceData,
 				trace,
 				{ href: '/organizations', label: 'Organizations' },
 				{ href: '/admin/users', label: 'People & access' },
@@ -88,6 +102,7 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 				overview,
 				shipments,
 				products,
+				referenceData,
 				trace,
 				{ href: '/organizations', label: 'Organizations' }
 			];

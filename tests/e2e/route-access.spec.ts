@@ -29,6 +29,10 @@ const READ_PRODUCTS: Expect = { anonymous: 303, customer: 403, default: 200 };
 const OTHER_SHIPMENT_PAGE: Expect = { anonymous: 303, broker: 404, customer: 404, default: 200 };
 const OTHER_SHIPMENT_API: Expect = { anonymous: 401, broker: 404, customer: 404, default: 200 };
 
+/** Landed-cost reference data: finance and admins edit, coordinators read. */
+const REFDATA_PAGE: Expect = { anonymous: 303, broker: 403, customer: 403, default: 200 };
+const REFDATA_ACTION: Expect = { anonymous: 303, admin: 400, finance: 400, default: 403 };
+
 const LIFECYCLE = ['retire', 'reinstate', 'remove'] as const;
 
 interface Probe {
@@ -37,7 +41,7 @@ interface Probe {
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
 	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :cedar
 	 * (Cedarpoint's, papers issued, no broker) and :cedarDoc (its first paper); :place,
-	 * :party, :pallet and :container (the first listed).
+	 * :party, :pallet, :container and :tariff (the first listed).
 	 */
 	path: string;
 	expect: Expect;
@@ -186,6 +190,52 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/equipment/container-types/:container',
 				form: { code: '' },
 				expect: EDITOR_ACTION
+			}
+		]
+	},
+	'/reference/exchange-rates': {
+		page: [
+			{ method: 'GET', path: '/reference/exchange-rates', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/exchange-rates?pair=USD-EUR', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/exchange-rates?/add',
+				form: { base: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/exchange-rates?/import',
+				form: { source: '' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/tariffs': {
+		page: [
+			{ method: 'GET', path: '/reference/tariffs', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/tariffs?destination=AU', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{ method: 'POST', path: '/reference/tariffs', form: { hsPrefix: '' }, expect: REFDATA_ACTION }
+		]
+	},
+	'/reference/tariffs/[tariffId=uuid]': {
+		page: [{ method: 'GET', path: '/reference/tariffs/:tariff', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/tariffs/:tariff?/save',
+				form: { hsPrefix: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/tariffs/:tariff?/retire',
+				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
 			}
 		]
 	},
@@ -488,6 +538,7 @@ test.describe('access per role', () => {
 		party: '',
 		pallet: '',
 		container: '',
+		tariff: '',
 		ship: '',
 		otherShip: '',
 		cedar: '',
@@ -541,6 +592,7 @@ test.describe('access per role', () => {
 		ids.party = await firstId('/parties', '/parties');
 		ids.pallet = await firstId('/equipment', '/equipment/pallet-types');
 		ids.container = await firstId('/equipment', '/equipment/container-types');
+		ids.tariff = await firstId('/reference/tariffs', '/reference/tariffs');
 	});
 
 	test.afterAll(async () => {
@@ -570,7 +622,8 @@ test.describe('access per role', () => {
 					.replace(':place', ids.place)
 					.replace(':party', ids.party)
 					.replace(':pallet', ids.pallet)
-					.replace(':container', ids.container);
+					.replace(':container', ids.container)
+					.replace(':tariff', ids.tariff);
 				const response = await client.fetch(url, {
 					method: probe.method,
 					maxRedirects: 0,

@@ -8,6 +8,7 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Products',
 		'Places & parties',
 		'Pallets & containers',
+		'Landed-cost data',
 		'Trace a serial',
 		'Organizations',
 		'People & access',
@@ -22,7 +23,14 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Trace a serial',
 		'Organizations'
 	],
-	finance: ['Overview', 'Shipments', 'Products', 'Trace a serial', 'Organizations'],
+	finance: [
+		'Overview',
+		'Shipments',
+		'Products',
+		'Landed-cost data',
+		'Trace a serial',
+		'Organizations'
+	],
 	broker: ['Overview', 'Shipments', 'Products', 'Our firm'],
 	customer: ['Overview', 'Shipments', 'Our company'],
 	otherCustomer: ['Overview', 'Shipments', 'Our company']

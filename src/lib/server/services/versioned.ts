@@ -4,7 +4,7 @@ import { refused, type Refusal } from './result';
 
 // Optimistic locking for master-data rows: bump the version the editor saw, or say why not.
 
-const TABLES = ['places', 'parties', 'pallet_types', 'container_types'] as const;
+const TABLES = ['places', 'parties', 'pallet_types', 'container_types', 'tariff_rows'] as const;
 export type VersionedTable = (typeof TABLES)[number];
 
 /** null when the row was bumped; else a 404 (no such row) or a 409 (someone saved first). */
