@@ -117,3 +117,24 @@ test('the master-data pages a coordinator edits', async ({ page }) => {
 	await expect(page.getByText('Enter the name.')).toBeVisible();
 	await expectAccessible(page, 'party detail with a field error');
 });
+
+test('the pages finance works in: landed cost and its reference data', async ({
+	page,
+	baseURL
+}) => {
+	test.setTimeout(120_000);
+	await signInPage(page, DEMO.finance);
+	for (const path of ['/reference/exchange-rates', '/reference/tariffs']) {
+		await page.goto(path);
+		await expectAccessible(page, path);
+	}
+	const list = await (await page.request.get(`${baseURL}/api/v1/shipments?pageSize=100`)).json();
+	const ship = list.rows.find((r: { customerName: string }) =>
+		r.customerName.startsWith('Wattlebird')
+	);
+	await page.goto(`/shipments/${ship.id}/landed-cost`);
+	await expect(page.getByRole('table', { name: 'Landed cost by mode' })).toBeVisible({
+		timeout: 30_000
+	});
+	await expectAccessible(page, 'landed-cost comparison');
+});
