@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { bestModes, comparisonCsv, groupDigits } from './landed-cost-view';
-import type { LandedCostOk } from './landed-cost/types';
+import { COST_KEYS, type LandedCostOk } from './landed-cost/types';
 
 // Invented figures, for the view logic only.
 const result = (mode: string, total: string, transitDays: number) =>
@@ -13,17 +13,7 @@ const result = (mode: string, total: string, transitDays: number) =>
 		transitDays,
 		emissionsKgCo2e: '12.5',
 		components: Object.fromEntries(
-			[
-				'goods',
-				'originCharges',
-				'freight',
-				'insurance',
-				'duty',
-				'vat',
-				'fees',
-				'brokerage',
-				'destinationCharges'
-			].map((k) => [k, { amount: '1.00', currency: 'USD', bearer: 'buyer' }])
+			COST_KEYS.map((k) => [k, { amount: '1.00', currency: 'USD', bearer: 'buyer' }])
 		)
 	}) as unknown as LandedCostOk;
 

@@ -5,6 +5,7 @@
  * Pure module: no framework imports.
  */
 import type { MeasureResult } from '../packing';
+import type { PackingListSnapshot } from './types';
 
 export interface SourceParty {
 	name: string;
@@ -87,16 +88,7 @@ export interface DocumentSource {
 	/** Name of the pallet type, when the cartons travel on pallets. */
 	palletType: string | null;
 	lots: SourceLot[];
-	loadPlan: {
-		containers: {
-			label: string;
-			type: string;
-			pieces: number;
-			volumeUsedPercent: string;
-			payloadKg: string;
-		}[];
-		unplaced: number;
-	} | null;
+	loadPlan: PackingListSnapshot['loadPlan'];
 }
 
 /** Number, revision and date of the paper being issued. */

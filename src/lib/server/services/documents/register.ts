@@ -4,6 +4,7 @@
  * the shipments assigned to its firm).
  */
 import { QueryTypes } from 'sequelize';
+import { isStaff } from '../../../roles';
 import { readiness, type ReadinessItem } from '../../../documents/readiness';
 import { DOCUMENT_KINDS, DOCUMENT_TITLES, type DocumentKind } from '../../../documents/types';
 import type { SessionUser } from '../../auth/session-user';
@@ -80,7 +81,7 @@ export async function documentRegister(
 ): Promise<DocumentRegister | null> {
 	const shipment = await visibleShipment(user, shipmentId);
 	if (!shipment) return null;
-	const staff = user.role === 'admin' || user.role === 'coordinator' || user.role === 'finance';
+	const staff = isStaff(user.role);
 	const rows = await Shipment.sequelize!.query<Row>(
 		`SELECT d.id, d.kind, d.number, d.revision, d.reason, d.issued_at, u.name AS issued_by, d.superseded_at,
 		        d.sha256, d.pages, d.byte_size, d.content_hash,

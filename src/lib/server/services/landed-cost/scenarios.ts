@@ -4,6 +4,7 @@
  * scenario as it was; recomputing it from its own inputs gives the same figures.
  */
 import { QueryTypes } from 'sequelize';
+import { isStaff } from '../../../roles';
 import type { LandedCostInput, LandedCostOk, TransportMode } from '../../../landed-cost/types';
 import type { SessionUser } from '../../auth/session-user';
 import { Shipment } from '../../db/models';
@@ -26,8 +27,6 @@ export interface Scenario extends ScenarioSummary {
 	results: Partial<Record<TransportMode, LandedCostOk>>;
 }
 
-const STAFF = new Set(['admin', 'coordinator', 'finance']);
-
 async function visible(user: SessionUser, shipmentId: string): Promise<boolean> {
 	const scope = shipmentScopeSql(user);
 	const rows = await Shipment.sequelize!.query(
@@ -43,7 +42,7 @@ export async function saveScenario(
 	request: { name: string; modes: TransportMode[]; options: InputOptions },
 	ip: string | null
 ): Promise<ServiceResult<{ id: string; modes: TransportMode[]; skipped: string[] }>> {
-	if (!STAFF.has(user.role)) return refused(403, 'Only staff save landed-cost scenarios.');
+	if (!isStaff(user.role)) return refused(403, 'Only staff save landed-cost scenarios.');
 	if (!(await visible(user, shipmentId)))
 		return refused(404, 'No shipment with this id is visible to you.');
 	const inputs: Partial<Record<TransportMode, LandedCostInput>> = {};
@@ -113,7 +112,7 @@ export async function listScenarios(
 	user: SessionUser,
 	shipmentId: string
 ): Promise<ScenarioSummary[]> {
-	if (!STAFF.has(user.role) || !(await visible(user, shipmentId))) return [];
+	if (!isStaff(user.role) || !(await visible(user, shipmentId))) return [];
 	const rows = await Shipment.sequelize!.query<Row>(
 		`SELECT c.id, c.name, c.created_at, u.name AS created_by, c.results
 		   FROM landed_cost_scenarios c LEFT JOIN users u ON u.id = c.created_by
@@ -128,7 +127,7 @@ export async function getScenario(
 	shipmentId: string,
 	scenarioId: string
 ): Promise<Scenario | null> {
-	if (!STAFF.has(user.role) || !(await visible(user, shipmentId))) return null;
+	if (!isStaff(user.role) || !(await visible(user, shipmentId))) return null;
 	const [row] = await Shipment.sequelize!.query<Row>(
 		`SELECT c.id, c.name, c.created_at, u.name AS created_by, c.results, c.inputs
 		   FROM landed_cost_scenarios c LEFT JOIN users u ON u.id = c.created_by
