@@ -29,9 +29,12 @@ test('finance compares air and sea and sees the breakdown and the chart', async 
 	await expect(table.getByText('cheapest')).toHaveCount(1);
 	await expect(table.getByText('fastest')).toHaveCount(1);
 	await expect(page.getByTestId('total-air')).toHaveText(/^\d{1,3}(,\d{3})*\.\d{2}$/);
-	await expect(
-		page.getByRole('figure', { name: 'Costs besides the goods, by mode' })
-	).toBeVisible();
+	const chart = page.getByRole('figure', { name: 'Costs besides the goods, by mode' });
+	await expect(chart).toBeVisible();
+	// layerchart draws one stacked bar per mode and component, with a legend of the components.
+	await expect(chart.locator('svg rect').first()).toBeVisible();
+	await expect(chart).toContainText('Freight');
+	await expect(chart).toContainText('Import VAT / GST');
 
 	const steps = page.getByRole('list', { name: 'Calculation steps' });
 	await expect(steps.getByRole('listitem').first()).toBeVisible();
