@@ -72,6 +72,50 @@ describe('shipment landed cost', () => {
 	});
 });
 
+describe('kept results', () => {
+	const ask = () => shipmentLandedCost(finance, hallvik, 'sea_lcl', { date: '2026-12-02' });
+
+	it('are reused while nothing they depend on changes, and dropped when something does', async () => {
+		const first = await ask();
+		expect(await ask()).toBe(first);
+		// Any write to reference data moves the generation (migration 016), even one that changes
+		// no figure; the next answer is computed afresh, with the same figures.
+		await sequelize.query(
+			`UPDATE country_rules SET source = source WHERE id = (SELECT id FROM country_rules LIMIT 1)`
+		);
+		const afterData = await ask();
+		expect(afterData).not.toBe(first);
+		expect(afterData).toEqual(first);
+		// An edit of the shipment moves its version.
+		await sequelize.query('UPDATE shipments SET version = version + 1 WHERE id = :id', {
+			replacements: { id: hallvik }
+		});
+		const afterEdit = await ask();
+		expect(afterEdit).not.toBe(afterData);
+		expect(afterEdit).toEqual(afterData);
+	});
+
+	it('are kept per set of assumptions', async () => {
+		const byWeight = await shipmentLandedCost(finance, hallvik, 'sea_lcl', {
+			date: '2026-12-02',
+			allocation: 'weight'
+		});
+		const byValue = await shipmentLandedCost(finance, hallvik, 'sea_lcl', {
+			date: '2026-12-02',
+			allocation: 'value'
+		});
+		if (!byWeight.ok || !byValue.ok) throw new Error('not computed');
+		expect(byWeight.input.allocation).toBe('weight');
+		expect(byValue.input.allocation).toBe('value');
+	});
+
+	it('are never handed to someone outside staff', async () => {
+		await ask();
+		const denied = await shipmentLandedCost(broker, hallvik, 'sea_lcl', { date: '2026-12-02' });
+		expect(denied.ok ? 200 : denied.status).toBe(404);
+	});
+});
+
 describe('saved scenarios', () => {
 	it('keep their figures when a tariff changes, and recompute the same from their own input', async () => {
 		const options = { date: '2026-12-02', allocation: 'value' as const };
