@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '$lib/roles';
 import type { SessionUser } from '$lib/server/auth/session-user';
 import { organizationHeadcounts } from '$lib/server/services/dashboard';
+import { recentPapers } from '$lib/server/services/recent-papers';
 import { getOrganization, listOrganizations } from '$lib/server/services/organizations';
 import { DEMO_ORGANIZATIONS } from '../../seeders/demo-scenario';
 import { demoOrganization, sessionUserFor } from './db';
@@ -121,3 +122,14 @@ describe.each(['coordinator@solvrae.example', 'finance@solvrae.example', 'admin@
 		});
 	}
 );
+
+describe('latest papers on the overview', () => {
+	it('give a customer only the papers of its own shipments', async () => {
+		const cedarpoint = await sessionUserFor('buyer@cedarpoint.example');
+		const own = await recentPapers(cedarpoint);
+		// Seeder 005 issues Cedarpoint's invoice and packing list.
+		expect(own.map((p) => p.kind).sort()).toEqual(['commercial_invoice', 'packing_list']);
+		const wattlebird = await recentPapers(await sessionUserFor('buyer@wattlebird.example'));
+		expect(wattlebird.filter((p) => own.some((o) => o.id === p.id))).toEqual([]);
+	});
+});
