@@ -18,9 +18,11 @@ export interface RecentPaper {
 /** The latest current papers of the shipments the user may see (scoped in the query), newest first. */
 export async function recentPapers(user: SessionUser, limit = 8): Promise<RecentPaper[]> {
 	const scope = shipmentScopeSql(user);
-	const rows = await Shipment.sequelize!.query<Omit<RecentPaper, 'title' | 'issuedAt'> & {
-		issuedAt: Date;
-	}>(
+	const rows = await Shipment.sequelize!.query<
+		Omit<RecentPaper, 'title' | 'issuedAt'> & {
+			issuedAt: Date;
+		}
+	>(
 		`SELECT d.id, d.shipment_id AS "shipmentId", s.reference, d.kind, d.number, d.revision,
 		        d.issued_at AS "issuedAt"
 		   FROM shipment_documents d JOIN shipments s ON s.id = d.shipment_id
