@@ -424,6 +424,8 @@ describe('landed-cost settings', () => {
 		const paths = (v: Record<string, unknown>) =>
 			settingsSchema.safeParse({ ...values, ...v }).error?.issues.map((i) => i.path.join('.'));
 		expect(paths({ insuranceRatePercent: '120' })).toEqual(['insuranceRatePercent']);
+		expect(paths({ insuranceRatePercent: '' })).toEqual(['insuranceRatePercent']);
+		expect(paths({ carryingRatePercent: 'eight' })).toEqual(['carryingRatePercent']);
 		expect(paths({ allocation: 'volume' })).toEqual(['allocation']);
 		const entry = { label: 'Entry', basis: 'per_shipment', amount: '95', currency: 'EUR' };
 		expect(

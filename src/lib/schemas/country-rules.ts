@@ -11,7 +11,8 @@ import { blankOr, checkValidity, validityFields } from './reference-data';
 /** A percentage from 0 to 100 with at most `scale` decimals. */
 export const percent = (label: string, scale: number) =>
 	decimalString(label, scale, 'zero').refine(
-		(v) => new Decimal(v).lte(100),
+		// zod runs this even when the pattern failed: only a number is compared.
+		(v) => !/^\d+(\.\d+)?$/.test(v) || new Decimal(v).lte(100),
 		`${label}: at most 100 %.`
 	);
 
@@ -47,7 +48,8 @@ export const countryRuleSchema = z
 		valuationBasis: z.enum(['CIF', 'FOB'], { error: 'Choose CIF or FOB.' }),
 		vat: vatRulesSchema
 			.extend({ ratePercent: percent('VAT rate', 4) })
-			.default({ label: 'VAT', ratePercent: '', reduced: [], baseIncludes: ['duty'] }),
+			// No rows in the default: superforms fills a refused form's empty arrays from it.
+			.default({ label: 'VAT', ratePercent: '', reduced: [], baseIncludes: [] }),
 		rounding: roundingRulesSchema.default({}),
 		...validityFields
 	})

@@ -104,11 +104,18 @@ export function termsTemplate(mode: TransportMode, currency = 'USD'): RateCardTe
 	}
 }
 
-/** Terms of another mode that keep the charges already typed. */
+/**
+ * Terms of another mode. Charges with an amount typed are kept; a list with none takes the new
+ * mode's usual rows instead (so an air card's blank fuel surcharge does not follow to road).
+ */
 export function switchMode(terms: RateCardTerms, mode: TransportMode): RateCardTerms {
 	if (terms.mode === mode) return terms;
-	const { surcharges, originCharges, destinationCharges } = terms;
-	return { ...termsTemplate(mode), surcharges, originCharges, destinationCharges };
+	const next = termsTemplate(mode);
+	for (const list of CHARGE_LISTS) {
+		const typed = terms[list].filter((c) => c.amount !== '');
+		if (typed.length) next[list] = typed;
+	}
+	return next;
 }
 
 const distance = z
@@ -128,7 +135,16 @@ export const rateCardSchema = z
 			.min(0, 'Transit days cannot be negative.')
 			.max(365, 'Transit days: at most 365.'),
 		distanceKm: blankOr(distance),
-		terms: rateCardTermsSchema.default(termsTemplate('air')),
+		// Empty lists: superforms fills a refused form's empty arrays from the default, so the
+		// default must not carry rows (the add form starts from termsTemplate instead).
+		terms: rateCardTermsSchema.default({
+			mode: 'air',
+			minimumCharge: '',
+			breaks: [],
+			surcharges: [],
+			originCharges: [],
+			destinationCharges: []
+		}),
 		...validityFields
 	})
 	.superRefine((card, ctx) => {

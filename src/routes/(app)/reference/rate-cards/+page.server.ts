@@ -1,4 +1,5 @@
 import { REFERENCE_DATA_READERS, canEditReferenceData } from '$lib/roles';
+import { termsTemplate } from '$lib/schemas/rate-cards';
 import { TRANSPORT_MODES, type TransportMode } from '$lib/trade/shipment-status';
 import { requireRole } from '$lib/server/auth/guard';
 import { rateCardPages } from '$lib/server/reference-page-specs';
@@ -32,7 +33,7 @@ export const load: PageServerLoad = async (event) => {
 		mode: wanted.mode ?? '',
 		lane: wanted.lane ?? '',
 		canEdit: canEditReferenceData(user.role),
-		form: await rateCardPages.addForm(),
+		form: await rateCardPages.addForm({ terms: termsTemplate('air') }),
 		currencies: countryAndCurrencyOptions().currencies,
 		containerTypes: await containerTypeChoices(),
 		asOf: await lastChanged(['rate_cards'])
