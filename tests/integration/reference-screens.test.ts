@@ -287,7 +287,7 @@ describe('country rules, fees and de minimis', () => {
 			fieldErrors: { validFrom: expect.any(String) }
 		});
 		// End the first, then the next year's rule fits.
-		expect((await retireCountryRow(finance, RULE, id, 1, '2026-12-31', null)).ok).toBe(true);
+		expect((await retireCountryRow(RULE)(finance, id, 1, '2026-12-31', null)).ok).toBe(true);
 		expect((await saveCountryRule(finance, null, rule({ validFrom: '2027-01-01' }), null)).ok).toBe(
 			true
 		);
@@ -308,11 +308,11 @@ describe('country rules, fees and de minimis', () => {
 			version: 1
 		});
 		// Retiring into no other row's dates; a stale version is refused.
-		expect(await retireCountryRow(finance, FEE, feeRow!.id, 0, '2026-12-31', null)).toMatchObject({
+		expect(await retireCountryRow(FEE)(finance, feeRow!.id, 0, '2026-12-31', null)).toMatchObject({
 			status: 409
 		});
 		expect(
-			await retireCountryRow(finance, DE_MINIMIS, feeRow!.id, 0, '2026-12-31', null)
+			await retireCountryRow(DE_MINIMIS)(finance, feeRow!.id, 0, '2026-12-31', null)
 		).toMatchObject({
 			status: 404
 		});

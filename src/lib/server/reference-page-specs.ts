@@ -45,8 +45,7 @@ export const countryRulePages = datedRowPages({
 	get: getCountryRule,
 	values: countryRuleFormValues,
 	save: saveCountryRule,
-	retire: (actor, id, version, validTo, ip) =>
-		retireCountryRow(actor, RULE, id, version, validTo, ip),
+	retire: retireCountryRow(RULE),
 	param: 'ruleId',
 	path: '/reference/country-rules',
 	missing: 'No such country rule.',
@@ -59,8 +58,7 @@ export const feePages = datedRowPages({
 	get: getFee,
 	values: feeFormValues,
 	save: saveFee,
-	retire: (actor, id, version, validTo, ip) =>
-		retireCountryRow(actor, FEE, id, version, validTo, ip),
+	retire: retireCountryRow(FEE),
 	param: 'feeId',
 	path: '/reference/country-rules/fees',
 	missing: 'No such customs fee.',
@@ -73,8 +71,7 @@ export const deMinimisPages = datedRowPages({
 	get: getDeMinimis,
 	values: deMinimisFormValues,
 	save: saveDeMinimis,
-	retire: (actor, id, version, validTo, ip) =>
-		retireCountryRow(actor, DE_MINIMIS, id, version, validTo, ip),
+	retire: retireCountryRow(DE_MINIMIS),
 	param: 'deMinimisId',
 	path: '/reference/country-rules/de-minimis',
 	missing: 'No such de minimis rule.',

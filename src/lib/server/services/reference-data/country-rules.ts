@@ -226,14 +226,8 @@ export const saveDeMinimis: Save<DeMinimisInput> = (actor, id, input, ip) =>
 		ip
 	);
 
-/** Ends a country rule's, fee's or de minimis rule's validity on `validTo`. */
-export function retireCountryRow(
-	actor: SessionUser,
-	spec: RowSpec,
-	id: string,
-	version: number,
-	validTo: string,
-	ip: string | null
-) {
-	return retireDatedRow(actor, spec, id, version, validTo, ip);
-}
+/** Ends a country rule's, fee's or de minimis rule's validity on `validTo` (by its spec). */
+export const retireCountryRow =
+	(spec: RowSpec) =>
+	(actor: SessionUser, id: string, version: number, validTo: string, ip: string | null) =>
+		retireDatedRow(actor, spec, id, version, validTo, ip);
