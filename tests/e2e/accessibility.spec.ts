@@ -124,9 +124,24 @@ test('the pages finance works in: landed cost and its reference data', async ({
 }) => {
 	test.setTimeout(120_000);
 	await signInPage(page, DEMO.finance);
-	for (const path of ['/reference/exchange-rates', '/reference/tariffs']) {
+	for (const path of [
+		'/reference/exchange-rates',
+		'/reference/tariffs',
+		'/reference/rate-cards',
+		'/reference/country-rules',
+		'/reference/settings'
+	]) {
 		await page.goto(path);
 		await expectAccessible(page, path);
+	}
+	for (const [list, link, label] of [
+		['/reference/rate-cards', /→/, 'rate card detail'],
+		['/reference/country-rules', 'US-MPF', 'customs fee detail']
+	] as const) {
+		await page.goto(list);
+		await page.getByRole('link', { name: link }).first().click();
+		await expect(page.getByRole('heading', { name: 'Edit' })).toBeVisible();
+		await expectAccessible(page, label);
 	}
 	const list = await (await page.request.get(`${baseURL}/api/v1/shipments?pageSize=100`)).json();
 	const ship = list.rows.find((r: { customerName: string }) =>

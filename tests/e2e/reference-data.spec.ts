@@ -50,3 +50,45 @@ test('a coordinator reads the rates but has no forms', async ({ page }) => {
 	await expect(page.getByRole('heading', { name: 'Exchange rates', level: 1 })).toBeVisible();
 	await expect(page.getByRole('button', { name: 'Add rate' })).toHaveCount(0);
 });
+
+test('finance adds a tariff row, edits its duty and ends its validity', async ({ page }) => {
+	test.setTimeout(60_000);
+	const prefix = `8504${String(Math.floor(Math.random() * 1e4)).padStart(4, '0')}`;
+	await signInPage(page, DEMO.finance);
+	await page.goto('/reference/tariffs');
+	const add = page.getByRole('region', { name: 'Add a tariff row' });
+	await add.getByLabel('Destination country').selectOption('AU');
+	await add.getByLabel('HS prefix').fill(prefix);
+	await add.getByLabel('Duty', { exact: true }).selectOption('compound');
+	await add.getByLabel('Duty rate (%)').fill('3');
+	await add.getByLabel('Duty amount').fill('0.25');
+	await add.getByLabel('Per', { exact: true }).selectOption('kg');
+	await add.getByLabel('Currency of the amount').selectOption('AUD');
+	await add.getByLabel('Valid from').fill('2026-01-01');
+	// Without a source note the row is refused on that field.
+	await add.getByRole('button', { name: 'Add tariff row' }).click();
+	await expect(add.getByText('Say where the figures come from')).toBeVisible();
+	await add.getByLabel('Source note').fill('E2E schedule, heading 8504');
+	await add.getByRole('button', { name: 'Add tariff row' }).click();
+
+	await expect(page.getByRole('heading', { name: `AU · HS ${prefix}` })).toBeVisible();
+	await expect(page.getByText('Tariff row added.')).toBeVisible();
+	const edit = page.getByRole('region', { name: 'Edit' });
+	await expect(edit.getByLabel('Duty amount')).toHaveValue('0.25');
+	await edit.getByLabel('Duty', { exact: true }).selectOption('ad_valorem');
+	await expect(edit.getByLabel('Duty amount')).toHaveCount(0);
+	await edit.getByLabel('Duty rate (%)').fill('2.5');
+	await edit.getByRole('button', { name: 'Save tariff row' }).click();
+	await expect(edit.getByRole('status')).toHaveText('Tariff row saved.');
+
+	const retire = page.getByRole('region', { name: 'End validity' });
+	await expect(retire).toContainText('2.5 %');
+	await retire.getByLabel('Last valid day').fill('2026-12-31');
+	await retire.getByRole('button', { name: 'Retire from that day' }).click();
+	await expect(retire.getByRole('status')).toHaveText('Valid until 2026-12-31.');
+
+	await page.goto(`/reference/tariffs?destination=AU`);
+	const row = page.getByRole('row', { name: new RegExp(prefix) });
+	await expect(row).toContainText('2.5 %');
+	await expect(row).toContainText('2026-01-01 – 2026-12-31');
+});

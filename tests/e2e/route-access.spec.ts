@@ -41,7 +41,8 @@ interface Probe {
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
 	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :cedar
 	 * (Cedarpoint's, papers issued, no broker) and :cedarDoc (its first paper); :place,
-	 * :party, :pallet, :container and :tariff (the first listed).
+	 * :party, :pallet, :container, :tariff, :rateCard, :countryRule, :fee and :deMinimis (the
+	 * first listed).
 	 */
 	path: string;
 	expect: Expect;
@@ -235,6 +236,131 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				method: 'POST',
 				path: '/reference/tariffs/:tariff?/retire',
 				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/rate-cards': {
+		page: [
+			{ method: 'GET', path: '/reference/rate-cards', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/rate-cards?mode=air&lane=MY-DE', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/rate-cards',
+				form: { laneFrom: '' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/rate-cards/[rateCardId=uuid]': {
+		page: [{ method: 'GET', path: '/reference/rate-cards/:rateCard', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/rate-cards/:rateCard?/save',
+				form: { laneFrom: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/rate-cards/:rateCard?/retire',
+				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/country-rules': {
+		page: [
+			{ method: 'GET', path: '/reference/country-rules', expect: REFDATA_PAGE },
+			{ method: 'GET', path: '/reference/country-rules?country=US', expect: REFDATA_PAGE }
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/country-rules?/addRule',
+				form: { country: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/country-rules?/addFee',
+				form: { code: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/country-rules?/addDeMinimis',
+				form: { country: '' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/country-rules/[ruleId=uuid]': {
+		page: [{ method: 'GET', path: '/reference/country-rules/:countryRule', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/country-rules/:countryRule?/save',
+				form: { country: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/country-rules/:countryRule?/retire',
+				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/country-rules/fees/[feeId=uuid]': {
+		page: [{ method: 'GET', path: '/reference/country-rules/fees/:fee', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/country-rules/fees/:fee?/save',
+				form: { code: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/country-rules/fees/:fee?/retire',
+				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/country-rules/de-minimis/[deMinimisId=uuid]': {
+		page: [
+			{
+				method: 'GET',
+				path: '/reference/country-rules/de-minimis/:deMinimis',
+				expect: REFDATA_PAGE
+			}
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/country-rules/de-minimis/:deMinimis?/save',
+				form: { country: '' },
+				expect: REFDATA_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/reference/country-rules/de-minimis/:deMinimis?/retire',
+				form: { validTo: 'x' },
+				expect: REFDATA_ACTION
+			}
+		]
+	},
+	'/reference/settings': {
+		page: [{ method: 'GET', path: '/reference/settings', expect: REFDATA_PAGE }],
+		actions: [
+			{
+				method: 'POST',
+				path: '/reference/settings',
+				form: { insuranceRatePercent: '' },
 				expect: REFDATA_ACTION
 			}
 		]
@@ -539,6 +665,10 @@ test.describe('access per role', () => {
 		pallet: '',
 		container: '',
 		tariff: '',
+		rateCard: '',
+		countryRule: '',
+		fee: '',
+		deMinimis: '',
 		ship: '',
 		otherShip: '',
 		cedar: '',
@@ -593,6 +723,13 @@ test.describe('access per role', () => {
 		ids.pallet = await firstId('/equipment', '/equipment/pallet-types');
 		ids.container = await firstId('/equipment', '/equipment/container-types');
 		ids.tariff = await firstId('/reference/tariffs', '/reference/tariffs');
+		ids.rateCard = await firstId('/reference/rate-cards', '/reference/rate-cards');
+		ids.countryRule = await firstId('/reference/country-rules', '/reference/country-rules');
+		ids.fee = await firstId('/reference/country-rules', '/reference/country-rules/fees');
+		ids.deMinimis = await firstId(
+			'/reference/country-rules',
+			'/reference/country-rules/de-minimis'
+		);
 	});
 
 	test.afterAll(async () => {
@@ -623,7 +760,11 @@ test.describe('access per role', () => {
 					.replace(':party', ids.party)
 					.replace(':pallet', ids.pallet)
 					.replace(':container', ids.container)
-					.replace(':tariff', ids.tariff);
+					.replace(':tariff', ids.tariff)
+					.replace(':rateCard', ids.rateCard)
+					.replace(':countryRule', ids.countryRule)
+					.replace(':fee', ids.fee)
+					.replace(':deMinimis', ids.deMinimis);
 				const response = await client.fetch(url, {
 					method: probe.method,
 					maxRedirects: 0,

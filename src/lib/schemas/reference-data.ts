@@ -54,7 +54,24 @@ export const exchangeRateImportSchema = z.object({
 });
 export type ExchangeRateImport = z.infer<typeof exchangeRateImportSchema>;
 
-const blankOr = <T extends z.ZodType>(schema: T) => z.union([z.literal(''), schema]).default('');
+/** An optional form field: '' (empty) or a value `schema` accepts. */
+export const blankOr = <T extends z.ZodType>(schema: T) =>
+	z.union([z.literal(''), schema]).default('');
+
+/** What every reference row's form carries: its source, the dates it is valid, its version. */
+export const validityFields = {
+	source: sourceNote,
+	validFrom: isoDate('Valid from'),
+	validTo: blankOr(isoDate('Valid to')),
+	version: rowVersion
+};
+
+/** Adds the issue "valid to before valid from" on validTo (for a superRefine). */
+export function checkValidity(row: { validFrom: string; validTo: string }, ctx: z.RefinementCtx) {
+	if (row.validTo && row.validTo < row.validFrom) {
+		ctx.addIssue({ code: 'custom', path: ['validTo'], message: 'Valid to is before valid from.' });
+	}
+}
 
 export const DUTY_KINDS = ['ad_valorem', 'specific', 'compound'] as const;
 export const DUTY_KIND_LABELS: Record<(typeof DUTY_KINDS)[number], string> = {
@@ -82,10 +99,7 @@ export const tariffSchema = z
 			.max(40, 'Keep the agreement code under 40 characters.')
 			.default(''),
 		originCountries: z.string().trim().toUpperCase().default(''),
-		source: sourceNote,
-		validFrom: isoDate('Valid from'),
-		validTo: blankOr(isoDate('Valid to')),
-		version: rowVersion
+		...validityFields
 	})
 	.superRefine((t, ctx) => {
 		const add = (path: string, message: string) =>
@@ -113,7 +127,7 @@ export const tariffSchema = z
 				'Name the trade agreement, or leave the origins empty for the general rate.'
 			);
 		}
-		if (t.validTo && t.validTo < t.validFrom) add('validTo', 'Valid to is before valid from.');
+		checkValidity(t, ctx);
 	});
 export type TariffInput = z.infer<typeof tariffSchema>;
 

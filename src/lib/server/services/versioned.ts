@@ -4,13 +4,24 @@ import { refused, type Refusal } from './result';
 
 // Optimistic locking for master-data rows: bump the version the editor saw, or say why not.
 
-const TABLES = ['places', 'parties', 'pallet_types', 'container_types', 'tariff_rows'] as const;
+const TABLES = [
+	'places',
+	'parties',
+	'pallet_types',
+	'container_types',
+	'tariff_rows',
+	'rate_cards',
+	'country_rules',
+	'customs_fees',
+	'de_minimis_rules',
+	'landed_cost_settings'
+] as const;
 export type VersionedTable = (typeof TABLES)[number];
 
 /** null when the row was bumped; else a 404 (no such row) or a 409 (someone saved first). */
 export async function bumpVersion(
 	table: VersionedTable,
-	id: string,
+	id: string | number,
 	version: number,
 	what: string,
 	transaction: Transaction

@@ -1,0 +1,12 @@
+import { deMinimisPages } from '$lib/server/reference-page-specs';
+import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import type { Actions, PageServerLoad } from './$types';
+
+// Returns: row (the stored threshold), canEdit, saved, form (edit), retireForm, countries,
+// currencies.
+export const load: PageServerLoad = async (event) => ({
+	...(await deMinimisPages.load(event)),
+	...countryAndCurrencyOptions()
+});
+
+export const actions: Actions = deMinimisPages.actions;
