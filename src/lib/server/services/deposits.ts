@@ -561,3 +561,12 @@ export async function markRefunded(
 	});
 	return true;
 }
+
+/** One deposit of a shipment as `listDeposits` shows it, or null when not visible. */
+export async function getDeposit(
+	user: SessionUser,
+	shipmentId: string,
+	depositId: string
+): Promise<DepositView | null> {
+	return (await listDeposits(user, shipmentId))?.find((d) => d.id === depositId) ?? null;
+}
