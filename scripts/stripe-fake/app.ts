@@ -72,9 +72,13 @@ function metadata(value: FormValue | undefined, param: string): Metadata {
 	if (!o) throw invalidParam(param, `Invalid object: ${param} must be a hash of strings.`);
 	const out: Metadata = {};
 	for (const [k, v] of Object.entries(o)) {
-		if (typeof v !== 'string') throw invalidParam(`${param}[${k}]`, 'Metadata values must be strings.');
+		if (typeof v !== 'string')
+			throw invalidParam(`${param}[${k}]`, 'Metadata values must be strings.');
 		if (k.length > 40 || v.length > 500)
-			throw invalidParam(`${param}[${k}]`, 'Metadata keys are at most 40 and values 500 characters.');
+			throw invalidParam(
+				`${param}[${k}]`,
+				'Metadata keys are at most 40 and values 500 characters.'
+			);
 		out[k] = v;
 	}
 	return out;
@@ -92,7 +96,8 @@ async function readBody(req: IncomingMessage): Promise<string> {
 	let size = 0;
 	for await (const chunk of req) {
 		size += (chunk as Buffer).length;
-		if (size > 1_000_000) throw new StripeFakeError(413, 'invalid_request_error', 'Request body too large.');
+		if (size > 1_000_000)
+			throw new StripeFakeError(413, 'invalid_request_error', 'Request body too large.');
 		chunks.push(chunk as Buffer);
 	}
 	return Buffer.concat(chunks).toString('utf8');
@@ -133,7 +138,9 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 		store.events.set(event.id, event);
 		if (options.webhookUrl) {
 			const url = options.webhookUrl;
-			track(deliver({ ...delivery, url }, event.id, JSON.stringify(event), (d) => deliveries.push(d)));
+			track(
+				deliver({ ...delivery, url }, event.id, JSON.stringify(event), (d) => deliveries.push(d))
+			);
 		}
 		return event;
 	}
@@ -174,21 +181,37 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 			const c = str(price, 'currency');
 			if (!c || !/^[a-z]{3}$/.test(c)) throw missingParam(`line_items[${i}][price_data][currency]`);
 			if (currency && c !== currency)
-				throw invalidParam(`line_items[${i}][price_data][currency]`, 'All line items must use the same currency.');
+				throw invalidParam(
+					`line_items[${i}][price_data][currency]`,
+					'All line items must use the same currency.'
+				);
 			currency = c;
 			if (!str(obj(price['product_data']) ?? {}, 'name'))
 				throw missingParam(`line_items[${i}][price_data][product_data][name]`);
-			const unit = integer(str(price, 'unit_amount'), `line_items[${i}][price_data][unit_amount]`, 1);
+			const unit = integer(
+				str(price, 'unit_amount'),
+				`line_items[${i}][price_data][unit_amount]`,
+				1
+			);
 			total += unit * integer(str(item, 'quantity'), `line_items[${i}][quantity]`, 1);
 		});
 		if (total > MAX_AMOUNT)
-			throw new StripeFakeError(400, 'invalid_request_error', 'Amount must be no more than 99999999 in the smallest currency unit.', 'amount_too_large', 'line_items');
+			throw new StripeFakeError(
+				400,
+				'invalid_request_error',
+				'Amount must be no more than 99999999 in the smallest currency unit.',
+				'amount_too_large',
+				'line_items'
+			);
 		const created = now();
 		const expiresAt = str(p, 'expires_at')
 			? integer(str(p, 'expires_at'), 'expires_at', 0)
 			: created + 24 * 3600;
 		if (expiresAt < created + 30 * 60 || expiresAt > created + 24 * 3600)
-			throw invalidParam('expires_at', 'The Checkout Session expiry must be between 30 minutes and 24 hours from now.');
+			throw invalidParam(
+				'expires_at',
+				'The Checkout Session expiry must be between 30 minutes and 24 hours from now.'
+			);
 		const id = newId('cs_test_');
 		const session: CheckoutSession = {
 			id,
@@ -211,7 +234,10 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 			url: `${base}/pay/${id}`
 		};
 		store.sessions.set(id, session);
-		store.intentMetadata.set(id, metadata(obj(p['payment_intent_data'])?.['metadata'], 'payment_intent_data[metadata]'));
+		store.intentMetadata.set(
+			id,
+			metadata(obj(p['payment_intent_data'])?.['metadata'], 'payment_intent_data[metadata]')
+		);
 		void idempotencyKey;
 		return session;
 	}
@@ -222,7 +248,10 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 			return { outcome: 'closed' as const, message: 'This payment session is no longer open.' };
 		const card = cardNumber.replace(/[\s-]/g, '');
 		if (card !== TEST_CARD_OK && card !== TEST_CARD_DECLINED)
-			return { outcome: 'invalid' as const, message: 'This test page takes only the test cards shown below.' };
+			return {
+				outcome: 'invalid' as const,
+				message: 'This test page takes only the test cards shown below.'
+			};
 		let intent = session.payment_intent ? store.intents.get(session.payment_intent) : undefined;
 		if (!intent) {
 			intent = {
@@ -249,7 +278,10 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 				type: 'card_error'
 			};
 			emit('payment_intent.payment_failed', intent);
-			return { outcome: 'declined' as const, message: 'The card was declined. Nothing was charged; you can try another card.' };
+			return {
+				outcome: 'declined' as const,
+				message: 'The card was declined. Nothing was charged; you can try another card.'
+			};
 		}
 		const captured = amount ?? session.amount_total;
 		const charge = {
@@ -295,13 +327,29 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 		if (intentId && !intent) throw noSuch('payment_intent', intentId);
 		const charge = store.charges.get(chargeId ?? intent?.latest_charge ?? '');
 		if (!charge)
-			throw new StripeFakeError(400, 'invalid_request_error', `This PaymentIntent (${intentId}) does not have a successful charge to refund.`, 'charge_not_refundable');
+			throw new StripeFakeError(
+				400,
+				'invalid_request_error',
+				`This PaymentIntent (${intentId}) does not have a successful charge to refund.`,
+				'charge_not_refundable'
+			);
 		const left = charge.amount - charge.amount_refunded;
 		if (left === 0)
-			throw new StripeFakeError(400, 'invalid_request_error', `Charge ${charge.id} has already been refunded.`, 'charge_already_refunded');
+			throw new StripeFakeError(
+				400,
+				'invalid_request_error',
+				`Charge ${charge.id} has already been refunded.`,
+				'charge_already_refunded'
+			);
 		const amount = str(p, 'amount') ? integer(str(p, 'amount'), 'amount', 1) : left;
 		if (amount > left)
-			throw new StripeFakeError(400, 'invalid_request_error', `Refund amount (${amount}) is greater than unrefunded amount on charge (${left})`, 'amount_too_large', 'amount');
+			throw new StripeFakeError(
+				400,
+				'invalid_request_error',
+				`Refund amount (${amount}) is greater than unrefunded amount on charge (${left})`,
+				'amount_too_large',
+				'amount'
+			);
 		const refund = {
 			id: newId('re_'),
 			object: 'refund' as const,
@@ -331,7 +379,12 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 		if (method === 'POST' && (m = /^\/v1\/checkout\/sessions\/([^/]+)\/expire$/.exec(path))) {
 			const session = findSession(m[1]!);
 			if (session.status !== 'open')
-				throw new StripeFakeError(400, 'invalid_request_error', 'Only Checkout Sessions with a status in ["open"] can be expired.', 'checkout_session_not_open');
+				throw new StripeFakeError(
+					400,
+					'invalid_request_error',
+					'Only Checkout Sessions with a status in ["open"] can be expired.',
+					'checkout_session_not_open'
+				);
 			expire(session);
 			return { status: 200, body: session };
 		}
@@ -340,7 +393,8 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 			if (!intent) throw noSuch('payment_intent', m[1]!);
 			return { status: 200, body: intent };
 		}
-		if (method === 'POST' && path === '/v1/refunds') return { status: 200, body: createRefund(p, key) };
+		if (method === 'POST' && path === '/v1/refunds')
+			return { status: 200, body: createRefund(p, key) };
 		if (method === 'GET' && (m = /^\/v1\/refunds\/([^/]+)$/.exec(path))) {
 			const refund = store.refunds.get(m[1]!);
 			if (!refund) throw noSuch('refund', m[1]!);
@@ -371,23 +425,38 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 			const payload = JSON.stringify(event);
 			const url = options.webhookUrl;
 			const run = Promise.all(
-				Array.from({ length: Math.min(copies, 20) }, () => postSigned({ ...delivery, url }, payload))
+				Array.from({ length: Math.min(copies, 20) }, () =>
+					postSigned({ ...delivery, url }, payload)
+				)
 			);
 			track(run);
 			return { status: 202, body: { object: 'list', data: [], accepted: copies } };
 		}
 		if (method === 'GET' && path === '/_fake/deliveries')
 			return { status: 200, body: { object: 'list', data: deliveries } };
-		throw new StripeFakeError(404, 'invalid_request_error', `Unrecognized request URL (${method}: ${path}).`);
+		throw new StripeFakeError(
+			404,
+			'invalid_request_error',
+			`Unrecognized request URL (${method}: ${path}).`
+		);
 	}
 
 	function authorise(req: IncomingMessage): void {
 		const header = req.headers.authorization ?? '';
 		const bearer = /^Bearer (\S+)$/.exec(header)?.[1];
 		if (!bearer)
-			throw new StripeFakeError(401, 'invalid_request_error', "You did not provide an API key. Provide your secret key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer sk_test_…').");
+			throw new StripeFakeError(
+				401,
+				'invalid_request_error',
+				"You did not provide an API key. Provide your secret key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer sk_test_…')."
+			);
 		if (bearer !== options.apiKey || !bearer.startsWith('sk_test_'))
-			throw new StripeFakeError(401, 'invalid_request_error', `Invalid API Key provided: ${bearer.slice(0, 8)}${'*'.repeat(Math.max(0, bearer.length - 12))}${bearer.slice(-4)}`, 'api_key_invalid');
+			throw new StripeFakeError(
+				401,
+				'invalid_request_error',
+				`Invalid API Key provided: ${bearer.slice(0, 8)}${'*'.repeat(Math.max(0, bearer.length - 12))}${bearer.slice(-4)}`,
+				'api_key_invalid'
+			);
 	}
 
 	function idempotent(req: IncomingMessage, path: string, p: Params, run: () => Answer): Answer {
@@ -398,7 +467,11 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 		const seen = store.idempotent.get(slot);
 		if (seen) {
 			if (seen.request !== request)
-				throw new StripeFakeError(400, 'idempotency_error', `Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${key}' if you meant to execute a different request.`);
+				throw new StripeFakeError(
+					400,
+					'idempotency_error',
+					`Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${key}' if you meant to execute a different request.`
+				);
 			return seen;
 		}
 		let answer: Answer;
@@ -413,13 +486,21 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 	}
 
 	function page(res: ServerResponse, status: number, html: string) {
-		res.writeHead(status, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
+		res.writeHead(status, {
+			'content-type': 'text/html; charset=utf-8',
+			'cache-control': 'no-store'
+		});
 		res.end(html);
 	}
 
 	async function payPageRoute(req: IncomingMessage, res: ServerResponse, id: string) {
 		const session = store.sessions.get(id);
-		if (!session) return page(res, 404, '<!doctype html><title>Not found</title><p>No such payment session.</p>');
+		if (!session)
+			return page(
+				res,
+				404,
+				'<!doctype html><title>Not found</title><p>No such payment session.</p>'
+			);
 		refresh(session);
 		const description = `Amount requested by the merchant (reference ${session.client_reference_id ?? session.id}).`;
 		if (req.method === 'GET') return page(res, 200, payPage({ session, description }));
@@ -433,14 +514,24 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
 				? 'Enter a security code of three or four digits.'
 				: null;
 		if (problem)
-			return page(res, 400, payPage({ session, description, card, notice: { tone: 'error', text: problem } }));
+			return page(
+				res,
+				400,
+				payPage({ session, description, card, notice: { tone: 'error', text: problem } })
+			);
 		const result = pay(session, card);
 		if (result.outcome === 'paid') {
-			res.writeHead(303, { location: session.success_url.replace('{CHECKOUT_SESSION_ID}', session.id) });
+			res.writeHead(303, {
+				location: session.success_url.replace('{CHECKOUT_SESSION_ID}', session.id)
+			});
 			return res.end();
 		}
 		const status = result.outcome === 'declined' ? 402 : 400;
-		return page(res, status, payPage({ session, description, card, notice: { tone: 'error', text: result.message } }));
+		return page(
+			res,
+			status,
+			payPage({ session, description, card, notice: { tone: 'error', text: result.message } })
+		);
 	}
 
 	async function handle(req: IncomingMessage, res: ServerResponse) {

@@ -30,10 +30,22 @@ export class StripeFakeError extends Error {
 }
 
 export const missingParam = (param: string) =>
-	new StripeFakeError(400, 'invalid_request_error', `Missing required param: ${param}.`, 'parameter_missing', param);
+	new StripeFakeError(
+		400,
+		'invalid_request_error',
+		`Missing required param: ${param}.`,
+		'parameter_missing',
+		param
+	);
 
 export const invalidParam = (param: string, message: string) =>
 	new StripeFakeError(400, 'invalid_request_error', message, 'parameter_invalid_integer', param);
 
 export const noSuch = (object: string, id: string) =>
-	new StripeFakeError(404, 'invalid_request_error', `No such ${object}: '${id}'`, 'resource_missing', 'id');
+	new StripeFakeError(
+		404,
+		'invalid_request_error',
+		`No such ${object}: '${id}'`,
+		'resource_missing',
+		'id'
+	);

@@ -23,7 +23,8 @@ function arrays(value: FormValue): FormValue {
 	const keys = Object.keys(value);
 	const converted: FormObject = {};
 	for (const key of keys) converted[key] = arrays(value[key]!);
-	if (keys.length > 0 && keys.every((k, i) => k === String(i))) return keys.map((k) => converted[k]!);
+	if (keys.length > 0 && keys.every((k, i) => k === String(i)))
+		return keys.map((k) => converted[k]!);
 	return converted;
 }
 

@@ -3,7 +3,10 @@ import { formatMinor } from '../../src/lib/deposits/minor-units';
 import type { CheckoutSession } from './objects';
 
 const escape = (s: string) =>
-	s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+	s.replace(
+		/[&<>"']/g,
+		(c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!
+	);
 
 export interface PageState {
 	session: CheckoutSession;

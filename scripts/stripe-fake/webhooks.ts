@@ -55,7 +55,9 @@ export async function deliver(
 		record({ eventId, attempt, status, at: new Date().toISOString() });
 		if (status >= 200 && status < 300) return true;
 		const wait = options.retryBaseMs * 2 ** (attempt - 1);
-		options.log(`webhook ${eventId} attempt ${attempt} → ${status || 'no connection'}; retry in ${wait} ms`);
+		options.log(
+			`webhook ${eventId} attempt ${attempt} → ${status || 'no connection'}; retry in ${wait} ms`
+		);
 		if (attempt < options.maxAttempts) await new Promise((r) => setTimeout(r, wait));
 	}
 	options.log(`webhook ${eventId} given up after ${options.maxAttempts} attempts`);

@@ -36,7 +36,10 @@ async function requestDeposit(browser: Browser, amount: string, note: string) {
 /** The buyer's row of that deposit on the shipment page. */
 async function buyerRow(page: Page, note: string) {
 	await page.goto(`/shipments/${shipmentId}`);
-	return page.getByRole('table', { name: 'Freight deposits' }).getByRole('row').filter({ hasText: note });
+	return page
+		.getByRole('table', { name: 'Freight deposits' })
+		.getByRole('row')
+		.filter({ hasText: note });
 }
 
 async function fillCard(page: Page, card: string) {

@@ -126,8 +126,12 @@ function ok<T>(result: ServiceResult<T>, what: string): T {
 
 const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
 
+/** The request form's input: a fixed amount in EUR due in a week unless told otherwise. */
+const requestInput = (fields: Record<string, string>) =>
+	depositRequestSchema.parse({ basis: 'amount', currency: 'EUR', dueDate: inDays(7), ...fields });
+
 async function newDeposit(amount = '1250.00', currency = 'EUR', shipmentId = hallvik) {
-	const input = depositRequestSchema.parse({ basis: 'amount', amount, currency, dueDate: inDays(7) });
+	const input = requestInput({ amount, currency });
 	const { id } = ok(await requestDeposit(finance, shipmentId, input, context), 'request');
 	created.push(id);
 	return id;
@@ -200,26 +204,20 @@ describe('requesting a deposit', () => {
 	it('keeps the amount in ISO 4217 minor units and refuses decimals the currency lacks', async () => {
 		const id = await newDeposit('1250.5', 'EUR');
 		expect(await deposit(id)).toMatchObject({ amountMinor: '125050', amount: 'EUR 1,250.50' });
-		const jpy = depositRequestSchema.parse({
-			basis: 'amount',
-			amount: '1500.5',
-			currency: 'JPY',
-			dueDate: inDays(3)
-		});
+		const jpy = requestInput({ amount: '1500.5', currency: 'JPY' });
 		const refused = await requestDeposit(finance, hallvik, jpy, context);
-		expect(refused).toMatchObject({ ok: false, status: 400, fieldErrors: { amount: /no decimals/ } });
+		expect(refused).toMatchObject({
+			ok: false,
+			status: 400,
+			fieldErrors: { amount: /no decimals/ }
+		});
 		const kwd = await newDeposit('12.345', 'KWD');
 		expect((await deposit(kwd)).amountMinor).toBe('12345');
 	});
 
 	it('takes a percentage of the chosen mode’s freight estimate and keeps the estimate', async () => {
 		// Hallvik's chosen mode is sea full container (demo data).
-		const input = depositRequestSchema.parse({
-			basis: 'percent',
-			percent: '30',
-			currency: 'EUR',
-			dueDate: inDays(10)
-		});
+		const input = requestInput({ basis: 'percent', percent: '30' });
 		const { id } = ok(await requestDeposit(coordinator, hallvik, input, context), 'percent');
 		created.push(id);
 		const d = await deposit(id);
@@ -236,23 +234,17 @@ describe('requesting a deposit', () => {
 
 	it('says as a field error when no estimate can be computed', async () => {
 		// Wattlebird's demo shipment has no chosen mode.
-		const input = depositRequestSchema.parse({
-			basis: 'percent',
-			percent: '20',
-			currency: 'AUD',
-			dueDate: inDays(5)
-		});
+		const input = requestInput({ basis: 'percent', percent: '20', currency: 'AUD' });
 		const result = await requestDeposit(finance, wattlebird, input, context);
-		expect(result).toMatchObject({ ok: false, status: 400, fieldErrors: { percent: /no chosen mode/ } });
+		expect(result).toMatchObject({
+			ok: false,
+			status: 400,
+			fieldErrors: { percent: /no chosen mode/ }
+		});
 	});
 
 	it('is for finance and coordinators; customers see only their own organization’s', async () => {
-		const input = depositRequestSchema.parse({
-			basis: 'amount',
-			amount: '10',
-			currency: 'EUR',
-			dueDate: inDays(5)
-		});
+		const input = requestInput({ amount: '10' });
 		expect(await requestDeposit(buyer, hallvik, input, context)).toMatchObject({ status: 403 });
 		const id = await newDeposit('99.00');
 		expect((await listDeposits(buyer, hallvik))!.map((d) => d.id)).toContain(id);
@@ -284,7 +276,9 @@ describe('paying through Checkout and the webhook', () => {
 		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
 		const paid = await payOnPage(url, '4242 4242 4242 4242');
 		expect(paid.status).toBe(303);
-		expect(paid.headers.get('location')).toMatch(new RegExp(`/deposits/${id}/paid\\?session_id=cs_test_`));
+		expect(paid.headers.get('location')).toMatch(
+			new RegExp(`/deposits/${id}/paid\\?session_id=cs_test_`)
+		);
 		await fake.settled();
 		const d = await deposit(id);
 		expect(d).toMatchObject({ state: 'paid', paidAmount: 'EUR 1,250.00', mismatchReason: null });
@@ -394,7 +388,10 @@ describe('paying through Checkout and the webhook', () => {
 			expect(await response.json()).toMatchObject({ code: 'bad_signature' });
 		}
 		// Signed for another body: a changed amount fails too.
-		const good = Stripe.webhooks.generateTestHeaderString({ payload: forged, secret: config.webhookSecret });
+		const good = Stripe.webhooks.generateTestHeaderString({
+			payload: forged,
+			secret: config.webhookSecret
+		});
 		expect((await callWebhook(forged.replace('6000', '1'), good)).status).toBe(400);
 		expect(await countRows('stripe_events')).toBe(eventsBefore);
 		expect(await deposit(id)).toEqual(before);

@@ -35,8 +35,7 @@ export function respond<T>(result: ServiceResult<T>, status = 200): Response {
 		code:
 			{ 403: 'forbidden', 404: 'not_found', 409: 'conflict', 502: 'upstream', 503: 'unavailable' }[
 				result.status as 403
-			] ??
-			'invalid_body',
+			] ?? 'invalid_body',
 		issues: Object.entries(result.fieldErrors).map(([path, message]) => ({ path, message }))
 	});
 }

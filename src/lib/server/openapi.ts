@@ -160,7 +160,7 @@ export function openApiDocument(origin: string) {
 				get: {
 					summary: 'Freight deposits of the shipment (staff; a customer only its own)',
 					description:
-						'Each deposit with `amountMinor` (ISO 4217 minor units as a string: JPY 0 decimals, KWD 3) and `amount` as printed, `basis` (`amount`, or `percent` with the freight `estimate` it used), `dueDate`, `state` (`requested`, `paid`, `expired`, `cancelled`, `refunded`), what was received and when. Staff also see `mismatchReason` (a payment that did not match and was not accepted) and who requested it. A deposit becomes paid only from the payment provider\'s verified webhook.',
+						"Each deposit with `amountMinor` (ISO 4217 minor units as a string: JPY 0 decimals, KWD 3) and `amount` as printed, `basis` (`amount`, or `percent` with the freight `estimate` it used), `dueDate`, `state` (`requested`, `paid`, `expired`, `cancelled`, `refunded`), what was received and when. Staff also see `mismatchReason` (a payment that did not match and was not accepted) and who requested it. A deposit becomes paid only from the payment provider's verified webhook.",
 					responses: { 200: ok('{ deposits: [...] }'), ...errors }
 				}
 			},

@@ -48,7 +48,11 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<EventOutcom
 			`UPDATE stripe_events SET handled_at = now(), outcome = :outcome, deposit_id = :depositId
 			  WHERE id = :id`,
 			{
-				replacements: { id: event.id, outcome: result.outcome.slice(0, 500), depositId: result.depositId },
+				replacements: {
+					id: event.id,
+					outcome: result.outcome.slice(0, 500),
+					depositId: result.depositId
+				},
 				transaction
 			}
 		);
@@ -63,7 +67,9 @@ const idOf = (value: string | { id: string } | null | undefined) =>
 
 /** 'EUR 12.50', or the raw figures when the currency is not one Landfall knows. */
 function money(minor: bigint, currency: string): string {
-	return isPaymentCurrency(currency) ? formatMinor(minor, currency) : `${minor} ${currency} minor units`;
+	return isPaymentCurrency(currency)
+		? formatMinor(minor, currency)
+		: `${minor} ${currency} minor units`;
 }
 
 async function apply(event: Stripe.Event, transaction: Transaction): Promise<Applied> {
@@ -155,7 +161,10 @@ async function sessionCompleted(
 	return { outcome: 'paid', ...at };
 }
 
-async function paymentFailed(intent: Stripe.PaymentIntent, transaction: Transaction): Promise<Applied> {
+async function paymentFailed(
+	intent: Stripe.PaymentIntent,
+	transaction: Transaction
+): Promise<Applied> {
 	const d = await lockDepositFor('id', intent.metadata?.deposit_id ?? '', transaction);
 	if (!d) return { outcome: 'ignored: the payment names no deposit of Landfall', depositId: null };
 	const message = (intent.last_payment_error?.message ?? 'The payment failed.').slice(0, 500);
@@ -205,7 +214,10 @@ async function chargeRefunded(charge: Stripe.Charge, transaction: Transaction): 
 	};
 }
 
-async function sessionExpired(session: Stripe.Checkout.Session, transaction: Transaction): Promise<Applied> {
+async function sessionExpired(
+	session: Stripe.Checkout.Session,
+	transaction: Transaction
+): Promise<Applied> {
 	const d = await lockDepositFor('id', session.metadata?.deposit_id ?? '', transaction);
 	if (!d) return { outcome: 'ignored: the session names no deposit of Landfall', depositId: null };
 	if (d.checkoutSessionId === session.id)

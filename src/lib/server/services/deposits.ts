@@ -229,7 +229,10 @@ async function freightEstimate(
 	date: string
 ): Promise<{ ok: true; amount: string; mode: TransportMode } | { ok: false; message: string }> {
 	if (!mode)
-		return { ok: false, message: 'The shipment has no chosen mode, so there is no freight estimate.' };
+		return {
+			ok: false,
+			message: 'The shipment has no chosen mode, so there is no freight estimate.'
+		};
 	const estimate = await shipmentLandedCost(user, shipmentId, mode, {
 		date,
 		reportCurrency: currency
@@ -237,7 +240,10 @@ async function freightEstimate(
 	if (!estimate.ok)
 		return { ok: false, message: `No freight estimate can be computed: ${estimate.message}` };
 	if (!estimate.result.ok) {
-		const why = estimate.result.missing.map((m) => m.message).slice(0, 3).join(' ');
+		const why = estimate.result.missing
+			.map((m) => m.message)
+			.slice(0, 3)
+			.join(' ');
 		return { ok: false, message: `No freight estimate can be computed for this mode. ${why}` };
 	}
 	const amount = estimate.result.components.freight.amount;
@@ -259,7 +265,9 @@ export async function requestDeposit(
 		return refused(409, 'The shipment is cancelled: no deposit can be requested on it.');
 	const date = today();
 	if (input.dueDate < date)
-		return refused(400, 'Check the highlighted fields.', { dueDate: 'Choose today or a later day.' });
+		return refused(400, 'Check the highlighted fields.', {
+			dueDate: 'Choose today or a later day.'
+		});
 
 	let amountMinor: bigint;
 	let estimate: { amount: string; mode: TransportMode } | null = null;
@@ -268,7 +276,13 @@ export async function requestDeposit(
 		if (!minor.ok) return refused(400, 'Check the highlighted fields.', { amount: minor.message });
 		amountMinor = minor.minor;
 	} else {
-		const found = await freightEstimate(user, shipmentId, shipment.chosenMode, input.currency, date);
+		const found = await freightEstimate(
+			user,
+			shipmentId,
+			shipment.chosenMode,
+			input.currency,
+			date
+		);
 		if (!found.ok) return refused(400, 'Check the highlighted fields.', { percent: found.message });
 		estimate = found;
 		amountMinor = percentOfMinor(found.amount, input.percent, input.currency);
@@ -377,14 +391,23 @@ export async function cancelDeposit(
 		if (version !== undefined && d.version !== version)
 			return refused(409, 'This deposit changed meanwhile. Reload and try again.');
 		if (!canCancel(d))
-			return refused(409, `A deposit that is ${d.state} or has a payment on it cannot be cancelled.`);
+			return refused(
+				409,
+				`A deposit that is ${d.state} or has a payment on it cannot be cancelled.`
+			);
 		await sequelize().query(
 			`UPDATE deposits SET state = 'cancelled', version = version + 1, updated_at = now()
 			  WHERE id = :depositId`,
 			{ replacements: { depositId }, transaction }
 		);
 		await recordAudit(
-			{ actorUserId: user.id, action: 'deposit.cancel', entity: 'deposit', entityId: depositId, ip },
+			{
+				actorUserId: user.id,
+				action: 'deposit.cancel',
+				entity: 'deposit',
+				entityId: depositId,
+				ip
+			},
 			transaction
 		);
 		return { ok: true as const, value: { id: depositId, session: d.checkoutSessionId } };
@@ -427,12 +450,14 @@ export async function startCheckout(
 	try {
 		if (d.checkoutSessionId) {
 			const existing = await stripe.checkout.sessions.retrieve(d.checkoutSessionId);
-			if (existing.status === 'open' && existing.url) return { ok: true, value: { url: existing.url } };
+			if (existing.status === 'open' && existing.url)
+				return { ok: true, value: { url: existing.url } };
 			if (existing.status === 'complete')
 				return refused(409, 'This deposit has been paid; the confirmation is on its way.');
 		}
 		const amount = Number(d.amountMinor);
-		if (!Number.isSafeInteger(amount)) return refused(400, 'The deposit amount is too large to pay by card.');
+		if (!Number.isSafeInteger(amount))
+			return refused(400, 'The deposit amount is too large to pay by card.');
 		const metadata = {
 			deposit_id: d.id,
 			shipment_id: d.shipmentId,
@@ -504,7 +529,10 @@ export async function refundDeposit(
 	if (version !== undefined && d.version !== version)
 		return refused(409, 'This deposit changed meanwhile. Reload and try again.');
 	if (!canRefund(d) || !d.paymentIntentId || !d.paidAmountMinor)
-		return refused(409, `A deposit that is ${d.state} with no payment to return cannot be refunded.`);
+		return refused(
+			409,
+			`A deposit that is ${d.state} with no payment to return cannot be refunded.`
+		);
 	let refund: Stripe.Refund;
 	try {
 		refund = await payments().stripe.refunds.create(

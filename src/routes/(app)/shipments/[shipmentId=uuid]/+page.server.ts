@@ -17,6 +17,7 @@ import { documentRegister } from '$lib/server/services/documents/register';
 import { cachedLoadPlan } from '$lib/server/services/load-plan';
 import { addLot, addLots, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
+import type { ServiceResult } from '$lib/server/services/result';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
 import { canEditShipments } from '$lib/server/services/shipment-scope';
 import {
@@ -197,6 +198,19 @@ async function depositAction(event: RequestEvent) {
 }
 const NO_DEPOSIT = { depositError: 'That deposit could not be identified.' };
 
+/** Cancel and refund: the named deposit, the service, and the panel's note or error. */
+async function depositStep<T>(
+	event: RequestEvent,
+	run: (depositId: string, version: number | undefined, ip: string) => Promise<ServiceResult<T>>,
+	done: (value: T) => string
+) {
+	const target = await depositAction(event);
+	if (!target) return fail(400, NO_DEPOSIT);
+	const result = await run(target.depositId, target.version, event.getClientAddress());
+	if (!result.ok) return fail(result.status, { depositError: result.message });
+	return { depositDone: done(result.value) };
+}
+
 export const actions: Actions = {
 	header: async (event) => {
 		const user = editor(event);
@@ -348,29 +362,19 @@ export const actions: Actions = {
 	},
 	cancelDeposit: async (event) => {
 		const user = requireRole(event, ...DEPOSIT_REQUESTERS);
-		const target = await depositAction(event);
-		if (!target) return fail(400, NO_DEPOSIT);
-		const result = await cancelDeposit(
-			user,
-			target.depositId,
-			target.version,
-			event.getClientAddress()
+		return depositStep(
+			event,
+			(id, version, ip) => cancelDeposit(user, id, version, ip),
+			() => 'Deposit cancelled.'
 		);
-		if (!result.ok) return fail(result.status, { depositError: result.message });
-		return { depositDone: 'Deposit cancelled.' };
 	},
 	refundDeposit: async (event) => {
 		const user = requireRole(event, 'finance');
-		const target = await depositAction(event);
-		if (!target) return fail(400, NO_DEPOSIT);
-		const result = await refundDeposit(
-			user,
-			target.depositId,
-			target.version,
-			event.getClientAddress()
+		return depositStep(
+			event,
+			(id, version, ip) => refundDeposit(user, id, version, ip),
+			(v) => `Refund ${v.refundId} made.`
 		);
-		if (!result.ok) return fail(result.status, { depositError: result.message });
-		return { depositDone: `Refund ${result.value.refundId} made.` };
 	},
 	payDeposit: async (event) => {
 		const user = requireRole(event, 'customer');
