@@ -4,6 +4,12 @@ import { defineConfig } from '@playwright/test';
 const PORT = Number(process.env.E2E_PORT ?? 4390);
 const baseURL = `http://127.0.0.1:${PORT}`;
 const chromium = process.env.CHROMIUM_PATH ?? '/usr/lib/chromium/chromium';
+// The local Stripe fake the app pays through in these tests (scripts/stripe-fake).
+const FAKE_PORT = process.env.STRIPE_FAKE_PORT ?? '12111';
+const stripe = {
+	STRIPE_SECRET_KEY: 'sk_test_landfall_e2e',
+	STRIPE_WEBHOOK_SECRET: 'whsec_landfall_e2e'
+};
 
 export default defineConfig({
 	testDir: 'tests/e2e',
@@ -31,18 +37,37 @@ export default defineConfig({
 			]
 		}
 	},
-	webServer: {
-		command: 'node build',
-		url: `${baseURL}/api/health`,
-		timeout: 60_000,
-		reuseExistingServer: false,
-		stdout: 'pipe',
-		env: {
-			PORT: String(PORT),
-			HOST: '127.0.0.1',
-			ORIGIN: baseURL,
-			DATABASE_URL: process.env.DATABASE_URL ?? '',
-			AUTH_SECRET: process.env.AUTH_SECRET ?? ''
+	webServer: [
+		{
+			command: 'node --import tsx scripts/stripe-fake/main.ts',
+			url: `http://127.0.0.1:${FAKE_PORT}/health`,
+			timeout: 30_000,
+			reuseExistingServer: false,
+			stdout: 'pipe',
+			env: {
+				...stripe,
+				STRIPE_FAKE_PORT: FAKE_PORT,
+				STRIPE_FAKE_WEBHOOK_URL: `${baseURL}/api/v1/stripe/webhook`,
+				STRIPE_FAKE_RETRY_MS: '250'
+			}
+		},
+		{
+			command: 'node build',
+			url: `${baseURL}/api/health`,
+			timeout: 60_000,
+			reuseExistingServer: false,
+			stdout: 'pipe',
+			env: {
+				PORT: String(PORT),
+				HOST: '127.0.0.1',
+				ORIGIN: baseURL,
+				DATABASE_URL: process.env.DATABASE_URL ?? '',
+				AUTH_SECRET: process.env.AUTH_SECRET ?? '',
+				...stripe,
+				STRIPE_API_HOST: '127.0.0.1',
+				STRIPE_API_PORT: FAKE_PORT,
+				STRIPE_API_PROTOCOL: 'http'
+			}
 		}
-	}
+	]
 });

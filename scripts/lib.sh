@@ -61,3 +61,39 @@ ensure_build() {
 	node_modules/.bin/vite build --logLevel error
 	echo "$want" >"$stamp"
 }
+
+# Card payments: the local Stripe fake (scripts/stripe-fake) on loopback, unless a real Stripe
+# key is configured (STRIPE_SECRET_KEY set without STRIPE_API_HOST: Stripe's own test mode).
+# Exports the STRIPE_* variables the app reads. Call after ORIGIN is set; stop_stripe_fake stops it.
+start_stripe_fake() {
+	if [[ -n ${STRIPE_SECRET_KEY:-} && -z ${STRIPE_API_HOST:-} ]]; then
+		say "Card payments: Stripe itself (STRIPE_SECRET_KEY is set, no STRIPE_API_HOST)"
+		return 0
+	fi
+	export STRIPE_FAKE_PORT=${STRIPE_FAKE_PORT:-4312}
+	export STRIPE_SECRET_KEY=${STRIPE_SECRET_KEY:-sk_test_landfall_local_fake}
+	export STRIPE_WEBHOOK_SECRET=${STRIPE_WEBHOOK_SECRET:-whsec_landfall_local_fake}
+	export STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT=$STRIPE_FAKE_PORT STRIPE_API_PROTOCOL=http
+	export STRIPE_FAKE_WEBHOOK_URL=${STRIPE_FAKE_WEBHOOK_URL:-$ORIGIN/api/v1/stripe/webhook}
+	say "Starting the local Stripe fake on http://127.0.0.1:$STRIPE_FAKE_PORT"
+	# node --import tsx: one process, so stopping it by its id stops the fake.
+	node --import tsx scripts/stripe-fake/main.ts &
+	STRIPE_FAKE_PID=$!
+	local i
+	for i in $(seq 1 50); do
+		node -e "fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" \
+			"http://127.0.0.1:$STRIPE_FAKE_PORT/health" && return 0
+		kill -0 "$STRIPE_FAKE_PID" 2>/dev/null || break
+		sleep 0.2
+	done
+	echo "The local Stripe fake did not start on port $STRIPE_FAKE_PORT (is the port taken?)." >&2
+	exit 1
+}
+
+stop_stripe_fake() {
+	if [[ -n ${STRIPE_FAKE_PID:-} ]]; then
+		kill "$STRIPE_FAKE_PID" 2>/dev/null || true
+		wait "$STRIPE_FAKE_PID" 2>/dev/null || true
+		STRIPE_FAKE_PID=
+	fi
+}

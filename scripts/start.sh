@@ -19,12 +19,13 @@ say "Starting PostgreSQL ($LANDFALL_PG_NAME cluster, port $LANDFALL_PG_PORT)"
 bash scripts/pg.sh start
 DATABASE_URL=${DATABASE_URL:-$(bash scripts/pg.sh url)}
 export DATABASE_URL
-trap 'bash scripts/pg.sh stop' EXIT
+trap 'stop_stripe_fake; bash scripts/pg.sh stop' EXIT
 
 say "Migrating and seeding the demo"
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx scripts/seed.ts
 ensure_build
+start_stripe_fake
 
 cat >&2 <<MSG
 
@@ -36,7 +37,9 @@ cat >&2 <<MSG
     broker@kaaiman.example       customs broker
     buyer@hallvik.example        customer (Hallvik Heimtechnik, DE)
     buyer@wattlebird.example     customer (Wattlebird Home Retail, AU)
-  Press Ctrl-C to stop the app and its database.
+  Card payments: ${STRIPE_FAKE_PID:+the local Stripe fake at http://127.0.0.1:$STRIPE_FAKE_PORT}${STRIPE_FAKE_PID:-Stripe (test mode keys from .env)}
+    test cards on its page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
+  Press Ctrl-C to stop the app, the payment fake and the database.
 
 MSG
 node build

@@ -32,6 +32,13 @@ const OTHER_SHIPMENT_API: Expect = { anonymous: 401, broker: 404, customer: 404,
 /** Landed-cost reference data: finance and admins edit, coordinators read. */
 const REFDATA_PAGE: Expect = { anonymous: 303, broker: 403, customer: 403, default: 200 };
 const REFDATA_ACTION: Expect = { anonymous: 303, admin: 400, finance: 400, default: 403 };
+/** Deposit requests and cancels: finance and coordinators (an empty form is a 400). */
+const DEPOSIT_STAFF_ACTION: Expect = {
+	anonymous: 303,
+	finance: 400,
+	coordinator: 400,
+	default: 403
+};
 
 const LIFECYCLE = ['retire', 'reinstate', 'remove'] as const;
 
@@ -429,6 +436,50 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/shipments/:ship?/issuePapers',
 				form: { x: '' },
 				expect: EDITOR_ACTION
+			},
+			// Deposits: finance and coordinators request and cancel, finance refunds, the customer pays.
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/requestDeposit',
+				form: { basis: '' },
+				expect: DEPOSIT_STAFF_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/cancelDeposit',
+				form: { depositId: 'x' },
+				expect: DEPOSIT_STAFF_ACTION
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/refundDeposit',
+				form: { depositId: 'x' },
+				expect: { anonymous: 303, finance: 400, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/shipments/:ship?/payDeposit',
+				form: { depositId: 'x' },
+				expect: { anonymous: 303, customer: 400, default: 403 }
+			}
+		]
+	},
+	// No deposit has this id: invisible to everyone signed in.
+	'/shipments/[shipmentId=uuid]/deposits/[depositId=uuid]/paid': {
+		page: [
+			{
+				method: 'GET',
+				path: '/shipments/:ship/deposits/00000000-0000-4000-8000-000000000000/paid',
+				expect: { anonymous: 303, default: 404 }
+			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/deposits/[depositId=uuid]/not-paid': {
+		page: [
+			{
+				method: 'GET',
+				path: '/shipments/:ship/deposits/00000000-0000-4000-8000-000000000000/not-paid',
+				expect: { anonymous: 303, default: 404 }
 			}
 		]
 	},
@@ -595,6 +646,24 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				expect: { anonymous: 401, broker: 403, customer: 403, default: 400 }
 			}
 		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/deposits': {
+		api: [
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:ship/deposits',
+				expect: { anonymous: 401, broker: 403, default: 200 }
+			},
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:otherShip/deposits',
+				expect: { anonymous: 401, broker: 403, customer: 404, default: 200 }
+			}
+		]
+	},
+	// No session needed: an unsigned body is refused the same for everyone and changes nothing.
+	'/api/v1/stripe/webhook': {
+		api: [{ method: 'POST', path: '/api/v1/stripe/webhook', body: {}, expect: { default: 400 } }]
 	},
 	'/api/v1/shipments/[shipmentId=uuid]/load-plan': {
 		api: [

@@ -33,8 +33,9 @@ export function respond<T>(result: ServiceResult<T>, status = 200): Response {
 	error(result.status, {
 		message: result.message,
 		code:
-			{ 403: 'forbidden', 404: 'not_found', 409: 'conflict' }[result.status as 403] ??
-			'invalid_body',
+			{ 403: 'forbidden', 404: 'not_found', 409: 'conflict', 502: 'upstream', 503: 'unavailable' }[
+				result.status as 403
+			] ?? 'invalid_body',
 		issues: Object.entries(result.fieldErrors).map(([path, message]) => ({ path, message }))
 	});
 }

@@ -155,6 +155,23 @@ export function openApiDocument(origin: string) {
 					}
 				}
 			},
+			'/shipments/{shipmentId}/deposits': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Freight deposits of the shipment (staff; a customer only its own)',
+					description:
+						"Each deposit with `amountMinor` (ISO 4217 minor units as a string: JPY 0 decimals, KWD 3) and `amount` as printed, `basis` (`amount`, or `percent` with the freight `estimate` it used), `dueDate`, `state` (`requested`, `paid`, `expired`, `cancelled`, `refunded`), what was received and when. Staff also see `mismatchReason` (a payment that did not match and was not accepted) and who requested it. A deposit becomes paid only from the payment provider's verified webhook.",
+					responses: { 200: ok('{ deposits: [...] }'), ...errors }
+				}
+			},
+			'/stripe/webhook': {
+				post: {
+					summary: 'Stripe webhook endpoint (no session: the Stripe-Signature header is checked)',
+					description:
+						'The raw body is verified with the webhook secret (HMAC-SHA256 of `t.payload`); a bad or missing signature is a 400 and changes nothing. Each event id is applied once. Used: `checkout.session.completed`, `payment_intent.payment_failed`, `refund.created`, `charge.refunded`, `checkout.session.expired`; other types are acknowledged and ignored. 503 asks Stripe to retry.',
+					responses: { 200: ok('`{ received: true, duplicate, outcome }`'), 400: error, 503: error }
+				}
+			},
 			'/calc/load-plan': {
 				post: {
 					summary: 'Plan items into containers without storing anything',

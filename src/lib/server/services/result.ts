@@ -4,7 +4,8 @@ export type FieldErrors = Record<string, string>;
 
 export type Refusal = {
 	ok: false;
-	status: 400 | 403 | 404 | 409;
+	/** 502/503: a service Landfall depends on (the payment provider) refused or is not set up. */
+	status: 400 | 403 | 404 | 409 | 502 | 503;
 	message: string;
 	fieldErrors: FieldErrors;
 };

@@ -1,14 +1,23 @@
-import { error, fail, type RequestEvent } from '@sveltejs/kit';
+import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
+import {
+	DEPOSIT_REQUESTERS,
+	cancelDeposit,
+	listDeposits,
+	refundDeposit,
+	requestDeposit,
+	startCheckout
+} from '$lib/server/services/deposits';
 import { issuePapers } from '$lib/server/services/documents/issue';
 import { documentRegister } from '$lib/server/services/documents/register';
 import { cachedLoadPlan } from '$lib/server/services/load-plan';
 import { addLot, addLots, listLots, removeLot } from '$lib/server/services/shipment-lots';
 import { measureShipment } from '$lib/server/services/shipment-measure';
+import type { ServiceResult } from '$lib/server/services/result';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
 import { canEditShipments } from '$lib/server/services/shipment-scope';
 import {
@@ -20,6 +29,7 @@ import {
 	updatePaperDetails,
 	updateShipment
 } from '$lib/server/services/shipments';
+import { depositActionSchema, depositRequestSchema } from '$lib/schemas/deposits';
 import { issuePapersSchema, paperDetailsSchema } from '$lib/schemas/documents';
 import {
 	containerSchema,
@@ -98,7 +108,9 @@ export const load: PageServerLoad = async (event) => {
 		loadPlan,
 		papers,
 		paperForm,
-		issueForm
+		issueForm,
+		deposits,
+		depositForm
 	] = await Promise.all([
 		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
 		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
@@ -121,7 +133,17 @@ export const load: PageServerLoad = async (event) => {
 		superValidate({ kinds: [], reason: '' }, zod4(issuePapersSchema), {
 			errors: false,
 			id: 'issue'
-		})
+		}),
+		listDeposits(user, shipment.id),
+		superValidate(
+			{
+				basis: 'amount' as const,
+				currency: shipment.currency,
+				dueDate: new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10)
+			},
+			zod4(depositRequestSchema),
+			{ errors: false, id: 'deposit' }
+		)
 	]);
 	// Offer the papers not yet issued; a reissue is chosen on purpose.
 	issueForm.data.kinds = DOCUMENT_KINDS.filter(
@@ -153,11 +175,41 @@ export const load: PageServerLoad = async (event) => {
 		canPlanLoad: isStaff(user.role),
 		papers,
 		paperForm,
-		issueForm
+		issueForm,
+		// null for brokers: deposits are between the exporter and its customer.
+		deposits,
+		depositForm,
+		isCustomer: user.role === 'customer',
+		canRequestDeposit: (DEPOSIT_REQUESTERS as readonly string[]).includes(user.role),
+		currencies: countryAndCurrencyOptions().currencies
 	};
 };
 
 const editor = (event: RequestEvent) => requireRole(event, 'admin', 'coordinator');
+
+/** The deposit a cancel, refund or pay button names, or a 400 saying it is not one. */
+async function depositAction(event: RequestEvent) {
+	const data = await event.request.formData();
+	const parsed = depositActionSchema.safeParse({
+		depositId: data.get('depositId') ?? '',
+		version: data.get('version') ?? undefined
+	});
+	return parsed.success ? parsed.data : null;
+}
+const NO_DEPOSIT = { depositError: 'That deposit could not be identified.' };
+
+/** Cancel and refund: the named deposit, the service, and the panel's note or error. */
+async function depositStep<T>(
+	event: RequestEvent,
+	run: (depositId: string, version: number | undefined, ip: string) => Promise<ServiceResult<T>>,
+	done: (value: T) => string
+) {
+	const target = await depositAction(event);
+	if (!target) return fail(400, NO_DEPOSIT);
+	const result = await run(target.depositId, target.version, event.getClientAddress());
+	if (!result.ok) return fail(result.status, { depositError: result.message });
+	return { depositDone: done(result.value) };
+}
 
 export const actions: Actions = {
 	header: async (event) => {
@@ -296,6 +348,42 @@ export const actions: Actions = {
 		if (!result.ok) return refuse(form, result);
 		const n = result.value.ids.length;
 		return message(form, { tone: 'ok', text: `${n} lot${n === 1 ? '' : 's'} recorded.` });
+	},
+	requestDeposit: async (event) => {
+		const user = requireRole(event, ...DEPOSIT_REQUESTERS);
+		const form = await superValidate(event.request, zod4(depositRequestSchema), { id: 'deposit' });
+		if (!form.valid) return fail(400, { form });
+		const result = await requestDeposit(user, event.params.shipmentId, form.data, {
+			origin: event.url.origin,
+			ip: event.getClientAddress()
+		});
+		if (!result.ok) return refuse(form, result);
+		return message(form, { tone: 'ok', text: `Deposit of ${result.value.amount} requested.` });
+	},
+	cancelDeposit: async (event) => {
+		const user = requireRole(event, ...DEPOSIT_REQUESTERS);
+		return depositStep(
+			event,
+			(id, version, ip) => cancelDeposit(user, id, version, ip),
+			() => 'Deposit cancelled.'
+		);
+	},
+	refundDeposit: async (event) => {
+		const user = requireRole(event, 'finance');
+		return depositStep(
+			event,
+			(id, version, ip) => refundDeposit(user, id, version, ip),
+			(v) => `Refund ${v.refundId} made.`
+		);
+	},
+	payDeposit: async (event) => {
+		const user = requireRole(event, 'customer');
+		const target = await depositAction(event);
+		if (!target) return fail(400, NO_DEPOSIT);
+		const result = await startCheckout(user, target.depositId, event.url.origin);
+		if (!result.ok) return fail(result.status, { depositError: result.message });
+		// The payment provider's hosted page; the webhook, not this redirect, decides the outcome.
+		redirect(303, result.value.url);
 	},
 	removeLot: async (event) => {
 		const user = editor(event);
