@@ -28,7 +28,10 @@ const PAPERS = {
 	marks: '',
 	signatoryName: 'Nurul Aisyah Rahim',
 	signatoryTitle: 'Export coordinator',
-	signingPlace: 'Bayan Lepas, Penang'
+	signingPlace: 'Bayan Lepas, Penang',
+	preferentialOriginClaimed: false,
+	preferentialAgreement: '',
+	originStatement: ''
 };
 
 // A few demo shipments, created through the same services the app uses. Idempotent: each is

@@ -20,6 +20,13 @@ export const INVOICE_CAUTIONS: readonly string[] = Object.freeze([
 		'as the importing country requires.'
 ]);
 
+/** Printed under a preferential origin statement: the wording and the proof are the exporter's. */
+export const ORIGIN_STATEMENT_CAUTION =
+	'The statement on origin is the exporter’s own, in the wording the trade agreement prescribes. ' +
+	'A preferential rate applies only if the goods meet that agreement’s rules of origin and the ' +
+	'exporter holds the proof; the importing customs authority decides. Check with a licensed ' +
+	'customs broker.';
+
 export const DECLARATION_TEXT =
 	'We declare that the information on this invoice is true and correct, and that the goods ' +
 	'described originate in the countries shown.';
@@ -97,7 +104,10 @@ export function buildInvoice(source: DocumentSource, stamp: IssueStamp): Invoice
 
 	const d = source.details;
 	return {
-		...buildHeader('commercial_invoice', source, stamp, cartons, [...INVOICE_CAUTIONS]),
+		...buildHeader('commercial_invoice', source, stamp, cartons, [
+			...INVOICE_CAUTIONS,
+			...(d.preferentialOriginClaimed ? [ORIGIN_STATEMENT_CAUTION] : [])
+		]),
 		kind: 'commercial_invoice',
 		currency: source.currency,
 		minorUnits: minor,
@@ -111,6 +121,15 @@ export function buildInvoice(source: DocumentSource, stamp: IssueStamp): Invoice
 		netKg: m.totals.netKg,
 		grossKg: m.pallets ? m.pallets.grossKg : m.totals.grossKg,
 		packages,
+		// Absent unless claimed, so papers without a claim keep their content hash.
+		...(d.preferentialOriginClaimed
+			? {
+					originStatement: {
+						agreement: d.preferentialAgreement ?? '',
+						text: d.originStatement ?? ''
+					}
+				}
+			: {}),
 		declaration: {
 			text: DECLARATION_TEXT,
 			signatoryName: d.signatoryName ?? '',

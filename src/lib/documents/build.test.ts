@@ -137,3 +137,27 @@ describe('documentContent', () => {
 		expect(documentContent(buildInvoice(src, stamp))).not.toBe(documentContent(a));
 	});
 });
+
+describe('statement on origin', () => {
+	it('is printed only when preferential origin is claimed, with its caution', () => {
+		const plain = buildInvoice(sampleSource(), stamp);
+		expect(plain.originStatement).toBeUndefined();
+		const base = sampleSource();
+		const claimed = buildInvoice(
+			sampleSource({
+				details: {
+					...base.details,
+					preferentialOriginClaimed: true,
+					preferentialAgreement: 'Example agreement',
+					originStatement: 'Statement as written by the exporter.'
+				}
+			}),
+			stamp
+		);
+		expect(claimed.originStatement).toEqual({
+			agreement: 'Example agreement',
+			text: 'Statement as written by the exporter.'
+		});
+		expect(claimed.cautions.some((c) => /licensed customs broker/.test(c))).toBe(true);
+	});
+});

@@ -83,7 +83,10 @@ export function sampleSource(overrides: Partial<DocumentSource> = {}): DocumentS
 			marks: null,
 			signatoryName: 'Mira Example',
 			signatoryTitle: 'Export manager',
-			signingPlace: 'Penang'
+			signingPlace: 'Penang',
+			preferentialOriginClaimed: false,
+			preferentialAgreement: null,
+			originStatement: null
 		},
 		exporter: party('Example Audio Sdn Bhd', 'Penang', 'MY', 'MY-1234'),
 		buyer: party('Example Buyer BV', 'Rotterdam', 'NL', 'NL123'),
@@ -102,7 +105,10 @@ export function sampleSource(overrides: Partial<DocumentSource> = {}): DocumentS
 				netKgPerUnit: '2.1',
 				hasPackaging: true,
 				quantity: 162,
-				unitPrice: '48.3350'
+				unitPrice: '48.3350',
+				battery: 'none',
+				batteryChemistry: null,
+				un383OnFile: false
 			},
 			{
 				position: 2,
@@ -113,7 +119,10 @@ export function sampleSource(overrides: Partial<DocumentSource> = {}): DocumentS
 				netKgPerUnit: '0.105',
 				hasPackaging: true,
 				quantity: 1220,
-				unitPrice: '7.1250'
+				unitPrice: '7.1250',
+				battery: 'none',
+				batteryChemistry: null,
+				un383OnFile: false
 			}
 		],
 		measure: measure(measureInput(true)),
@@ -129,6 +138,7 @@ export function sampleSource(overrides: Partial<DocumentSource> = {}): DocumentS
 			}
 		],
 		loadPlan: null,
+		proofOfOriginOnFile: false,
 		...overrides
 	};
 }

@@ -7,10 +7,12 @@
 import { validateHsCode } from '../trade/hs-code';
 import { isIncoterm } from '../trade/incoterms';
 import { incotermCosts } from '../trade/incoterm-costs';
+import { complianceBlocking } from './compliance-readiness';
 import type { DocumentSource, SourceParty } from './source';
 
 /** Where the user fixes it: a section of the shipment page, or a product's page. */
-export type ReadinessArea = 'status' | 'header' | 'lines' | 'papers' | 'parties' | 'product';
+export type ReadinessArea =
+	'status' | 'header' | 'lines' | 'papers' | 'parties' | 'product' | 'documents';
 
 export interface ReadinessItem {
 	area: ReadinessArea;
@@ -113,5 +115,6 @@ export function readiness(source: DocumentSource): ReadinessItem[] {
 			'lines',
 			`The cartons cannot be computed: ${source.measure.problems.map((p) => p.message).join('; ')}`
 		);
+	items.push(...complianceBlocking(source));
 	return items;
 }

@@ -38,6 +38,11 @@ export interface SourceLine {
 	hasPackaging: boolean;
 	quantity: number;
 	unitPrice: string;
+	/** How the product carries lithium batteries ('none' when it has none). */
+	battery: 'none' | 'contained' | 'packed_with' | 'standalone';
+	batteryChemistry: 'lithium_ion' | 'lithium_metal' | null;
+	/** A current UN38.3 test summary is on file for the product or the shipment. */
+	un383OnFile: boolean;
 }
 
 export interface SourceLot {
@@ -60,6 +65,11 @@ export interface PaperDetails {
 	signatoryName: string | null;
 	signatoryTitle: string | null;
 	signingPlace: string | null;
+	/** True when the exporter claims preferential origin under a trade agreement. */
+	preferentialOriginClaimed: boolean;
+	preferentialAgreement: string | null;
+	/** The origin statement as the user wrote it (the agreement prescribes the wording). */
+	originStatement: string | null;
 }
 
 export interface DocumentSource {
@@ -89,6 +99,8 @@ export interface DocumentSource {
 	palletType: string | null;
 	lots: SourceLot[];
 	loadPlan: PackingListSnapshot['loadPlan'];
+	/** A current proof of preferential origin is on file for the shipment. */
+	proofOfOriginOnFile: boolean;
 }
 
 /** Number, revision and date of the paper being issued. */

@@ -123,6 +123,8 @@ export interface InvoiceSnapshot extends DocumentHeader {
 	grossKg: string;
 	/** e.g. { count: 40, kind: 'pallets' } or { count: 312, kind: 'cartons' }. */
 	packages: { count: number; kind: 'cartons' | 'pallets'; text: string };
+	/** Only when preferential origin is claimed: the statement as written, and its agreement. */
+	originStatement?: { agreement: string; text: string };
 	declaration: {
 		text: string;
 		signatoryName: string;

@@ -25,6 +25,9 @@ export const paperDetailsSchema = z.object({
 	signatoryName: text('Signatory', 100),
 	signatoryTitle: text('Title', 100),
 	signingPlace: text('Place of signing', 100),
+	preferentialOriginClaimed: z.boolean().default(false),
+	preferentialAgreement: text('Trade agreement', 200),
+	originStatement: text('Origin statement', 2000),
 	version: z.number().int().min(0)
 });
 export type PaperDetailsInput = z.infer<typeof paperDetailsSchema>;

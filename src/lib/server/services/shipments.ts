@@ -238,7 +238,10 @@ function paperFields(input: PaperDetailsInput) {
 		marks: orNull(input.marks),
 		signatoryName: orNull(input.signatoryName),
 		signatoryTitle: orNull(input.signatoryTitle),
-		signingPlace: orNull(input.signingPlace)
+		signingPlace: orNull(input.signingPlace),
+		preferentialOriginClaimed: input.preferentialOriginClaimed,
+		preferentialAgreement: orNull(input.preferentialAgreement),
+		originStatement: orNull(input.originStatement)
 	};
 }
 

@@ -52,6 +52,10 @@ export class Shipment extends Model<InferAttributes<Shipment>, InferCreationAttr
 	declare signatoryName: CreationOptional<string | null>;
 	declare signatoryTitle: CreationOptional<string | null>;
 	declare signingPlace: CreationOptional<string | null>;
+	// A claim of preferential origin and the statement the invoice carries (migration 019).
+	declare preferentialOriginClaimed: CreationOptional<boolean>;
+	declare preferentialAgreement: CreationOptional<string | null>;
+	declare originStatement: CreationOptional<string | null>;
 	declare version: CreationOptional<number>;
 	declare createdBy: string | null;
 	declare createdAt: CreationOptional<Date>;
@@ -141,6 +145,13 @@ export function initShipmentModels(sequelize: Sequelize): void {
 			signatoryName: optionalText(),
 			signatoryTitle: optionalText(),
 			signingPlace: optionalText(),
+			preferentialOriginClaimed: {
+				type: DataTypes.BOOLEAN,
+				allowNull: false,
+				defaultValue: false
+			},
+			preferentialAgreement: optionalText(),
+			originStatement: optionalText(),
 			version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
 			createdBy: uuid(true),
 			...timestamps()

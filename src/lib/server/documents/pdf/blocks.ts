@@ -183,11 +183,14 @@ export function transportFacts(
 
 /** Marks and numbers as given, line breaks kept. */
 export function writeMarks(frame: PageFrame, marks: string, numbers: string): void {
-	const doc = frame.doc;
-	const text = `${marks.trim() || 'No marks recorded'}\n${numbers}`;
-	const h = textHeight(doc, text, CONTENT_WIDTH, SIZE.body);
-	sectionTitle(frame, 'Marks and numbers', h);
-	plainText(doc, text, MARGIN.left, frame.y, { width: CONTENT_WIDTH });
+	writeTextBlock(frame, 'Marks and numbers', `${marks.trim() || 'No marks recorded'}\n${numbers}`);
+}
+
+/** A titled block of the user's free text (e.g. the statement on origin), wrapped to the page. */
+export function writeTextBlock(frame: PageFrame, title: string, text: string): void {
+	const h = textHeight(frame.doc, text, CONTENT_WIDTH, SIZE.body);
+	sectionTitle(frame, title, h);
+	plainText(frame.doc, text, MARGIN.left, frame.y, { width: CONTENT_WIDTH });
 	frame.y += h + 8;
 }
 

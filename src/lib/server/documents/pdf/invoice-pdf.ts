@@ -4,7 +4,14 @@
  */
 import { formatAmount, formatCount, formatFixed, formatKg } from '../../../documents/format';
 import type { InvoiceCharge, InvoiceLine, InvoiceSnapshot } from '../../../documents/types';
-import { openPaper, paperName, sectionTitle, writeCautions, writeMarks } from './blocks';
+import {
+	openPaper,
+	paperName,
+	sectionTitle,
+	writeCautions,
+	writeMarks,
+	writeTextBlock
+} from './blocks';
 import {
 	COLOUR,
 	CONTENT_WIDTH,
@@ -178,6 +185,14 @@ export async function renderInvoicePdf(
 	);
 	writeTotals(frame, s);
 	writeMarks(frame, s.marks, `Packages: ${s.packages.text}`);
+	if (s.originStatement) {
+		const { agreement, text } = s.originStatement;
+		writeTextBlock(
+			frame,
+			agreement ? `Statement on origin (${agreement})` : 'Statement on origin',
+			text
+		);
+	}
 	writeDeclaration(frame, s);
 	writeCautions(frame, s.cautions);
 	return finish(frame.doc, paperName(s));

@@ -129,7 +129,10 @@ export async function documentSource(
 			marks: row.marks,
 			signatoryName: row.signatoryName,
 			signatoryTitle: row.signatoryTitle,
-			signingPlace: row.signingPlace
+			signingPlace: row.signingPlace,
+			preferentialOriginClaimed: row.preferentialOriginClaimed,
+			preferentialAgreement: row.preferentialAgreement,
+			originStatement: row.originStatement
 		},
 		exporter,
 		buyer,
@@ -161,7 +164,10 @@ export async function documentSource(
 				netKgPerUnit: p?.netKgPerUnit ?? null,
 				hasPackaging: l.hasPackaging,
 				quantity: l.quantity,
-				unitPrice: l.unitPrice
+				unitPrice: l.unitPrice,
+				battery: p?.batteryConfig ?? 'none',
+				batteryChemistry: p?.batteryChemistry ?? null,
+				un383OnFile: false
 			};
 		}),
 		measure: result,
@@ -174,7 +180,8 @@ export async function documentSource(
 			serialFrom: l.serialFrom,
 			serialTo: l.serialTo
 		})),
-		loadPlan: loadPlanFigures(plan)
+		loadPlan: loadPlanFigures(plan),
+		proofOfOriginOnFile: false
 	};
 	return { source, shipmentId, exporterId: row.exporterId, version: row.version, loadPlan: plan };
 }

@@ -5,6 +5,7 @@
  */
 import { QueryTypes } from 'sequelize';
 import { isStaff } from '../../../roles';
+import { complianceAdvice, type ComplianceItem } from '../../../documents/compliance-readiness';
 import { readiness, type ReadinessItem } from '../../../documents/readiness';
 import { DOCUMENT_KINDS, DOCUMENT_TITLES, type DocumentKind } from '../../../documents/types';
 import type { SessionUser } from '../../auth/session-user';
@@ -42,6 +43,8 @@ export interface DocumentRegister {
 	papers: RegisterEntry[];
 	/** Staff who may issue: what blocks issuing now (empty = ready). */
 	readiness: ReadinessItem[] | null;
+	/** Staff who may issue: worth checking, but not blocking. */
+	advice: ComplianceItem[] | null;
 	canIssue: boolean;
 }
 
@@ -127,6 +130,7 @@ export async function documentRegister(
 			fileName: fileName(r.number, r.revision)
 		})),
 		readiness: items,
+		advice: gathered ? complianceAdvice(gathered.source) : null,
 		canIssue: editor
 	};
 }

@@ -96,6 +96,9 @@ export const load: PageServerLoad = async (event) => {
 		signatoryName: shipment.signatoryName ?? '',
 		signatoryTitle: shipment.signatoryTitle ?? '',
 		signingPlace: shipment.signingPlace ?? '',
+		preferentialOriginClaimed: shipment.preferentialOriginClaimed,
+		preferentialAgreement: shipment.preferentialAgreement ?? '',
+		originStatement: shipment.originStatement ?? '',
 		version: shipment.version
 	};
 	const [
