@@ -8,6 +8,8 @@ import {
 	rememberSession,
 	sessionCookieKey
 } from '$lib/server/auth/session-cache';
+import { env } from '$env/dynamic/private';
+import { extraPolicy } from '$lib/server/content-security';
 import { db } from '$lib/server/db';
 import { userForToken } from '$lib/server/services/api-tokens';
 
@@ -83,6 +85,9 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	response.headers.set('Referrer-Policy', 'same-origin');
 	response.headers.set('X-Frame-Options', 'DENY');
 	response.headers.set('Permissions-Policy', 'camera=(), microphone=(), geolocation=()');
+	response.headers.set('Cross-Origin-Opener-Policy', 'same-origin');
+	if (response.headers.has('content-security-policy'))
+		response.headers.append('Content-Security-Policy', extraPolicy(env));
 	if (isApiPath(event.url.pathname) || event.locals.user) {
 		response.headers.set('Cache-Control', 'no-store');
 	}

@@ -136,6 +136,25 @@ describe('documentContent', () => {
 		src.lines = [{ ...src.lines[0]!, unitPrice: '48.3400' }, src.lines[1]!];
 		expect(documentContent(buildInvoice(src, stamp))).not.toBe(documentContent(a));
 	});
+
+	it('does not count a load plan that arrived after the issue as a change', async () => {
+		const { documentContent } = await import('./content');
+		const before = buildPackingList(sampleSource({ loadPlan: null }), stamp);
+		const plan = {
+			containers: [
+				{
+					label: 'Container 1',
+					type: '40 ft',
+					pieces: 12,
+					volumeUsedPercent: '61.0',
+					payloadKg: '812.400'
+				}
+			],
+			unplaced: 0
+		};
+		const after = buildPackingList(sampleSource({ loadPlan: plan }), stamp);
+		expect(documentContent(after)).toBe(documentContent(before));
+	});
 });
 
 describe('statement on origin', () => {

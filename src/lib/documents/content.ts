@@ -5,6 +5,7 @@
  *
  * Pure module: no framework imports.
  */
+import { LOAD_PLAN_CAUTION } from './build-packing-list';
 import type { DocumentSnapshot } from './types';
 
 function canonical(value: unknown): unknown {
@@ -27,6 +28,12 @@ export function documentContent(snapshot: DocumentSnapshot): string {
 		const declaration: Record<string, unknown> = { ...snapshot.declaration };
 		delete declaration.date;
 		content.declaration = declaration;
+	}
+	// The load-plan summary is filled in when the background planner has finished, which may be
+	// just after the issue: its arrival alone must not make an issued paper look out of date.
+	if (snapshot.kind === 'packing_list') {
+		delete content.loadPlan;
+		content.cautions = snapshot.cautions.filter((c) => c !== LOAD_PLAN_CAUTION);
 	}
 	return JSON.stringify(canonical(content));
 }
