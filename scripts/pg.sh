@@ -2,7 +2,7 @@
 # pg.sh: runs Landfall's own local PostgreSQL cluster. It never touches the
 # system cluster on port 5432.
 #
-# Usage: scripts/pg.sh start|stop|status|reset|url|psql [psql args...]
+# Usage: scripts/pg.sh start|stop|status|reset|url|psql [psql args...]|backup [FILE]|restore FILE
 #
 # Settings come from the environment:
 #   LANDFALL_PG_NAME  cluster name            (default demo; tests use test)
@@ -403,6 +403,41 @@ cmd_psql() {
 	exec "$BIN/psql" -h "$HOST" -p "$PORT" -U "$ROLE" -d "$DB" "$@"
 }
 
+require_running() {
+	find_bindir || die "PostgreSQL binaries not found; run 'scripts/pg.sh start' first"
+	"$BIN/pg_isready" -q -h "$HOST" -p "$PORT" -U "$SUPERUSER" -d postgres ||
+		die "nothing is accepting connections on $HOST:$PORT; start Landfall (npm start) or 'scripts/pg.sh start' first"
+}
+
+# A consistent snapshot in pg_dump's custom format (compressed; pg_restore can pick from it).
+# pg_dump runs as the app role: it owns every table, so nothing is left out.
+cmd_backup() {
+	require_running
+	local file=${1:-$REPO_ROOT/backups/$DB-$(date -u +%Y%m%dT%H%M%SZ).dump}
+	mkdir -p "$(dirname -- "$file")"
+	"$BIN/pg_dump" -h "$HOST" -p "$PORT" -U "$ROLE" -d "$DB" --format=custom --no-owner --file="$file.partial"
+	mv -- "$file.partial" "$file" # never leave a half-written file under the final name
+	log "backed up '$DB' to $file ($(du -h -- "$file" | cut -f1))"
+	printf '%s
+' "$file"
+}
+
+# Replaces the database's contents with the backup's, all or nothing: the schema is dropped and
+# rebuilt inside one transaction, so a failed restore leaves the database as it was.
+cmd_restore() {
+	local file=${1:-}
+	[[ -n $file ]] || die "usage: scripts/pg.sh restore FILE (a file written by 'scripts/pg.sh backup')"
+	[[ -f $file ]] || die "no such backup file: $file"
+	require_running
+	"$BIN/pg_restore" --list "$file" >/dev/null 2>&1 || die "$file is not a pg_dump custom-format backup"
+	log "restoring '$DB' from $file"
+	{
+		printf 'DROP SCHEMA IF EXISTS public CASCADE;\nCREATE SCHEMA public;\n'
+		"$BIN/pg_restore" --no-owner --file=- "$file"
+	} | "$BIN/psql" -q -X -v ON_ERROR_STOP=1 --single-transaction -h "$HOST" -p "$PORT" -U "$ROLE" -d "$DB" >/dev/null
+	log "restored"
+}
+
 usage() {
 	cat >&2 <<EOF
 usage: scripts/pg.sh start|stop|status|reset|reset-db|url|psql [psql args...]
@@ -413,6 +448,8 @@ usage: scripts/pg.sh start|stop|status|reset|reset-db|url|psql [psql args...]
   reset-db  drop and recreate the app database in the running cluster
   url     print the connection URL only
   psql    open psql on the database (extra args are passed on)
+  backup [FILE]   pg_dump the database (default backups/DB-UTC-TIME.dump); prints the file
+  restore FILE    replace the database's contents with a backup, in one transaction
 env: LANDFALL_PG_NAME=$NAME LANDFALL_PG_PORT=$PORT LANDFALL_PG_DB=$DB LANDFALL_PG_USER=$ROLE
 EOF
 }
@@ -436,6 +473,8 @@ reset-db) cmd_reset_db ;;
 status) cmd_status ;;
 url) printf '%s\n' "$URL" ;;
 psql) cmd_psql "$@" ;;
+backup) cmd_backup "$@" ;;
+restore) cmd_restore "$@" ;;
 -h | --help | help)
 	usage
 	;;
