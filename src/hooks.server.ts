@@ -63,7 +63,8 @@ const loadUser: Handle = async ({ event, resolve }) => {
 // Whole-area checks; every load, action and endpoint checks its role again where the data is.
 const guardAreas: Handle = ({ event, resolve }) => {
 	const { pathname } = event.url;
-	if (PUBLIC_PATHS.has(pathname)) return resolve(event);
+	// An invitation's set-password link proves itself with its token (checked in the page).
+	if (PUBLIC_PATHS.has(pathname) || pathname.startsWith('/set-password/')) return resolve(event);
 	const user = event.locals.user;
 	if (!user && isApiPath(pathname)) {
 		return json(

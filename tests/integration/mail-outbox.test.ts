@@ -111,7 +111,11 @@ describe('mail outbox', () => {
 		expect(row.due_in_ms).toBeGreaterThan(100); // 200 ms after the first failure
 
 		// Not due yet: nothing is tried.
-		expect(await dispatchDue(transport, { policy: fast })).toEqual({ sent: 0, retried: 0, failed: 0 });
+		expect(await dispatchDue(transport, { policy: fast })).toEqual({
+			sent: 0,
+			retried: 0,
+			failed: 0
+		});
 		await sleep(250);
 		await dispatchDue(transport, { policy: fast });
 		row = await rowOf(m.dedupeKey);
@@ -121,7 +125,11 @@ describe('mail outbox', () => {
 		await startCatcher();
 		await sleep(450);
 		expect((await dispatchDue(transport, { policy: fast })).sent).toBe(1);
-		expect(await dispatchDue(transport, { policy: fast })).toEqual({ sent: 0, retried: 0, failed: 0 });
+		expect(await dispatchDue(transport, { policy: fast })).toEqual({
+			sent: 0,
+			retried: 0,
+			failed: 0
+		});
 		expect(caughtFor(m.recipient)).toHaveLength(1);
 		row = await rowOf(m.dedupeKey);
 		expect(row.status).toBe('sent');

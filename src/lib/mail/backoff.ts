@@ -21,7 +21,10 @@ export const DEFAULT_BACKOFF: BackoffPolicy = {
 };
 
 /** Milliseconds to wait after the `attempts`-th failure, or null when the message has failed for good. */
-export function retryDelayMs(attempts: number, policy: BackoffPolicy = DEFAULT_BACKOFF): number | null {
+export function retryDelayMs(
+	attempts: number,
+	policy: BackoffPolicy = DEFAULT_BACKOFF
+): number | null {
 	if (!Number.isInteger(attempts) || attempts < 1) throw new RangeError('attempts starts at 1');
 	if (attempts >= policy.maxAttempts) return null;
 	// 2^(n-1) grows past the cap quickly; stop doubling early so the number stays small.

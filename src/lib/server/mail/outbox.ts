@@ -28,7 +28,10 @@ export interface OutgoingMessage extends MailContent {
 const sequelize = () => User.sequelize!;
 
 /** Queues a message in the caller's transaction. False when its dedupe key was queued before. */
-export async function enqueue(transaction: Transaction, message: OutgoingMessage): Promise<boolean> {
+export async function enqueue(
+	transaction: Transaction,
+	message: OutgoingMessage
+): Promise<boolean> {
 	const rows = await sequelize().query<{ id: string }>(
 		`INSERT INTO mail_outbox (kind, recipient, subject, html, text, dedupe_key)
 		 VALUES (:kind, :recipient, :subject, :html, :text, :dedupeKey)

@@ -88,7 +88,13 @@ export async function reinviteUser(
 	await sequelize().transaction(async (transaction) => {
 		await issueInvitation(transaction, actor, user, context.origin, INVITATION_HOURS);
 		await recordAudit(
-			{ actorUserId: actor.id, action: 'user.invite', entity: 'user', entityId: user.id, ip: context.ip },
+			{
+				actorUserId: actor.id,
+				action: 'user.invite',
+				entity: 'user',
+				entityId: user.id,
+				ip: context.ip
+			},
 			transaction
 		);
 	});
@@ -107,7 +113,9 @@ const PENDING = `SELECT i.id AS "invitationId", u.id AS "userId", u.name, u.emai
 	WHERE i.token_hash = :hash AND i.used_at IS NULL AND i.expires_at > now() AND NOT u.disabled`;
 
 /** Who a set-password link is for, or null when it is unknown, used, expired or disabled. */
-export async function pendingInvitation(token: string): Promise<Omit<Pending, 'invitationId'> | null> {
+export async function pendingInvitation(
+	token: string
+): Promise<Omit<Pending, 'invitationId'> | null> {
 	if (!/^[\w-]{20,100}$/.test(token)) return null;
 	const [row] = await sequelize().query<Pending>(PENDING, {
 		type: QueryTypes.SELECT,
