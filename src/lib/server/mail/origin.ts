@@ -1,11 +1,10 @@
-import { env } from '$env/dynamic/private';
-
 /**
  * The address links in e-mails start with: ORIGIN (the app's public origin, which adapter-node
- * needs anyway). Mail queued from a request uses that request's origin instead.
+ * needs anyway). Mail queued from a request uses that request's origin instead. Read from
+ * process.env, not $env, because the seed scripts run these services outside SvelteKit.
  */
 export function mailOrigin(): string {
-	return (env.ORIGIN || 'http://127.0.0.1:4310').replace(/\/+$/, '');
+	return (process.env.ORIGIN || 'http://127.0.0.1:4310').replace(/\/+$/, '');
 }
 
 /** A date for people: '2 Dec 2026' (UTC). */
