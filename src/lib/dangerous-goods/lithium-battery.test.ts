@@ -77,6 +77,20 @@ describe('watt-hours = V × Ah', () => {
 		);
 		expect(over?.withinSmallLimits).toBe(false);
 	});
+
+	it('is not hidden by a stored rating rounded down to the limit', () => {
+		// 3.7 V × 27.028 Ah = 100.0036 Wh, stored as 100.00 by rounding: above 100 Wh all the same.
+		const c = classifyLithiumBattery(
+			ion({ batteryWh: '100.00', nominalVoltage: '3.7', capacityAh: '27.028', cellWh: '10' })
+		);
+		expect(c?.ratings).toMatchObject({ batteryWh: '100.0036', batteryWhFromVoltage: true });
+		expect(c?.withinSmallLimits).toBe(false);
+		// A stored rating above V × Ah stands.
+		const marked = classifyLithiumBattery(
+			ion({ batteryWh: '99.00', nominalVoltage: '3.7', capacityAh: '26', cellWh: '10' })
+		);
+		expect(marked?.ratings).toMatchObject({ batteryWh: '99', batteryWhFromVoltage: false });
+	});
 });
 
 describe('small-battery limits', () => {

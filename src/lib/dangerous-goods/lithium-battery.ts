@@ -54,7 +54,7 @@ export interface BatteryRatings {
 	batteryWh: string | null;
 	cellLithiumG: string | null;
 	batteryLithiumG: string | null;
-	/** True when batteryWh was computed as nominal voltage × capacity. */
+	/** True when batteryWh is nominal voltage × capacity (none stored, or the stored one lower). */
 	batteryWhFromVoltage: boolean;
 	/** True when the battery is a single cell, so the cell limit applies to it. */
 	singleCell: boolean;
@@ -166,9 +166,14 @@ function ratingsOf(data: LithiumBatteryData, issues: DataIssue[]): BatteryRating
 	const volts = readDecimal(data, 'nominalVoltage', 'Nominal voltage', issues);
 	const ah = readDecimal(data, 'capacityAh', 'Capacity', issues);
 	let fromVoltage = false;
-	if (batteryWh === null && volts !== null && ah !== null) {
-		batteryWh = new Decimal(wattHours(volts.toString(), ah.toString()));
-		fromVoltage = true;
+	if (volts !== null && ah !== null) {
+		// The product service stores V × Ah rounded to 0.01 Wh, which can round 100.0036 down to
+		// the limit: when voltage and capacity are known, the exact product wins if it is higher.
+		const exact = new Decimal(wattHours(volts.toString(), ah.toString()));
+		if (batteryWh === null || exact.gt(batteryWh)) {
+			batteryWh = exact;
+			fromVoltage = true;
+		}
 	}
 	// A single-cell battery is a cell for these limits (UN Manual of Tests and Criteria,
 	// 38.3.2.3 definitions; IATA DGR Appendix A; from memory).

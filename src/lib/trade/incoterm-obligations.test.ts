@@ -6,6 +6,7 @@ import {
 } from './incoterm-obligations';
 import { INCOTERM_CODES, INCOTERMS_2020 } from './incoterms';
 import { bearer } from '../landed-cost/bearer';
+import { COST_KEYS } from '../landed-cost/types';
 
 const codes = (pick: (o: (typeof INCOTERM_OBLIGATIONS)[number]) => boolean) =>
 	INCOTERM_OBLIGATIONS.filter(pick)
@@ -87,5 +88,23 @@ describe('Incoterms 2020 obligations', () => {
 		expect(bearer('brokerage', 'DAP')).toBe('buyer');
 		expect(bearer('destinationCharges', 'DPU')).toBe('seller');
 		expect(bearer('destinationCharges', 'CIF')).toBe('buyer');
+	});
+
+	it('gives the landed-cost bearer the same answers as its former hand-written rules', () => {
+		// The rules bearer.ts held before this table (ICC, Incoterms® 2020, A9/B9; from memory).
+		const EF = ['EXW', 'FCA', 'FAS', 'FOB'];
+		const D = ['DAP', 'DPU', 'DDP'];
+		const former = (key: string, rule: string) => {
+			if (key === 'goods') return 'buyer';
+			if (key === 'originCharges') return rule === 'EXW' ? 'buyer' : 'seller';
+			if (key === 'freight') return EF.includes(rule) ? 'buyer' : 'seller';
+			if (key === 'insurance')
+				return rule === 'CIF' || rule === 'CIP' || D.includes(rule) ? 'seller' : 'buyer';
+			if (key === 'destinationCharges') return D.includes(rule) ? 'seller' : 'buyer';
+			return rule === 'DDP' ? 'seller' : 'buyer';
+		};
+		for (const rule of INCOTERM_CODES)
+			for (const key of COST_KEYS)
+				expect(bearer(key, rule), `${key} ${rule}`).toBe(former(key, rule));
 	});
 });
