@@ -104,8 +104,8 @@ export function screenAir(c: LithiumClassification, onDate: string, courier = fa
 		add(
 			soc === 'required' ? 'air_soc_required' : 'air_soc_recommended',
 			soc === 'required'
-				? `Ship the lithium-ion cells and batteries at a state of charge not exceeding ${LITHIUM_LIMITS.stateOfChargePercent} % of rated capacity.`
-				: `A state of charge not exceeding ${LITHIUM_LIMITS.stateOfChargePercent} % of rated capacity is recommended.`,
+				? `PI ${pi}: ship the lithium-ion cells and batteries at a state of charge not exceeding ${LITHIUM_LIMITS.stateOfChargePercent} % of rated capacity.`
+				: `PI ${pi}: a state of charge not exceeding ${LITHIUM_LIMITS.stateOfChargePercent} % of rated capacity is recommended.`,
 			source,
 			soc === 'required'
 		);
@@ -130,7 +130,7 @@ export function screenAir(c: LithiumClassification, onDate: string, courier = fa
 	} else {
 		add(
 			'air_awb_statement',
-			`No Shipper’s Declaration; the air waybill carries the Section II statement for PI ${pi}.`,
+			`Section II of PI ${pi} needs no Shipper’s Declaration; follow the carrier’s instructions for the air waybill wording.`,
 			SOURCES.airDeclaration
 		);
 	}

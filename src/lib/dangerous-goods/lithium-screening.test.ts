@@ -143,6 +143,17 @@ describe('summariseLithiumShipment', () => {
 		expect(s.actions.every((a) => a.action)).toBe(true);
 	});
 
+	it('keeps actions apart when their rules differ', () => {
+		const packed = { ...headset, sku: 'HS-KIT', batteryConfig: 'packed_with' as const };
+		const s = summariseLithiumShipment([{ product: powerBank }, { product: packed }], 'air', ON);
+		const soc = s.actions.filter((a) => a.id === 'air_soc_required');
+		expect(soc.map((a) => [a.skus, a.source.basis])).toEqual([
+			[['PB-20K'], 'from memory'],
+			[['HS-KIT'], 'secondary source']
+		]);
+		expect(soc[1]?.text).toMatch(/^PI 966:/);
+	});
+
 	it('names the lines with incomplete data', () => {
 		const s = summariseLithiumShipment(
 			[{ product: { ...powerBank, cellWh: null } }, { product: headset }],

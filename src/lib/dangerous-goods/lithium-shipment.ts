@@ -62,8 +62,8 @@ export function summariseLithiumShipment(
 		if (s.classification?.dataIssues.length) incomplete.add(sku);
 		for (const r of s.requirements) {
 			if (!r.action) continue;
-			// Same id, same text: one action. Texts differ by UN number or PI, so keep them apart.
-			const key = `${r.id}\u0000${r.text}`;
+			// Same id, text and source: one action (texts name the UN number or PI where they differ).
+			const key = [r.id, r.text, r.source.section].join('\u0000');
 			const seen = actions.get(key);
 			if (seen) {
 				if (!seen.skus.includes(sku)) seen.skus.push(sku);

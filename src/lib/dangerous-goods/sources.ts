@@ -83,7 +83,7 @@ export const SOURCES = Object.freeze({
 	airDeclaration: source(
 		IATA,
 		DGR,
-		'8.1 Shipper’s Declaration for Dangerous Goods; Section II: air waybill statement'
+		'8.1 Shipper’s Declaration for Dangerous Goods (not needed under Section II)'
 	),
 	courier: source(
 		'Express carriers',
