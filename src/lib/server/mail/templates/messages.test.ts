@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { composeMail } from './layout';
-import { depositRequestedMail, invitationMail, paymentReceivedMail } from './messages';
+import {
+	CUSTOMS_CAUTION,
+	depositRequestedMail,
+	documentsIssuedMail,
+	invitationMail,
+	paymentReceivedMail
+} from './messages';
 
 const origin = 'http://127.0.0.1:4310';
 const hostile = '<script>alert("x")</script> & <img src=x onerror=1>';
@@ -61,5 +67,17 @@ describe('mail templates', () => {
 	it('escape the subject in the HTML title', () => {
 		const mail = composeMail({ origin, subject: '<b>', heading: 'h', paragraphs: [] });
 		expect(mail.html).toContain('<title>&lt;b&gt;</title>');
+	});
+
+	it('papers-issued mail defers to a licensed customs broker', () => {
+		const mail = documentsIssuedMail({
+			origin,
+			name: 'Joost',
+			shipmentId: 'abc',
+			shipmentReference: 'SHP-1',
+			documents: ['Commercial invoice CI-2026-00001 rev. A']
+		});
+		expect(mail.text).toContain(`Please note: ${CUSTOMS_CAUTION}`);
+		expect(mail.text).toContain(`${origin}/shipments/abc`);
 	});
 });
