@@ -61,6 +61,7 @@ export default defineConfig({
 				PORT: String(PORT),
 				HOST: '127.0.0.1',
 				ORIGIN: baseURL,
+				BODY_SIZE_LIMIT: '11M',
 				DATABASE_URL: process.env.DATABASE_URL ?? '',
 				AUTH_SECRET: process.env.AUTH_SECRET ?? '',
 				...stripe,

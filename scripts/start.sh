@@ -14,6 +14,8 @@ export LANDFALL_PG_DB=${LANDFALL_PG_DB:-landfall}
 export PORT=${PORT:-4310}
 export HOST=${HOST:-127.0.0.1}
 export ORIGIN=${ORIGIN:-http://$HOST:$PORT}
+# Uploads are at most 10 MiB (src/lib/uploads/file-check.ts); the multipart body is a little more.
+export BODY_SIZE_LIMIT=${BODY_SIZE_LIMIT:-11M}
 
 say "Starting PostgreSQL ($LANDFALL_PG_NAME cluster, port $LANDFALL_PG_PORT)"
 bash scripts/pg.sh start

@@ -42,6 +42,17 @@ const DEPOSIT_STAFF_ACTION: Expect = {
 
 const LIFECYCLE = ['retire', 'reinstate', 'remove'] as const;
 
+/** Supporting documents: coordinators and admins add and retire; an empty form is a 400. */
+const SUPPORTING_ACTIONS = (page: string): Probe[] => [
+	{ method: 'POST', path: `${page}?/uploadSupporting`, form: { kind: '' }, expect: EDITOR_ACTION },
+	{
+		method: 'POST',
+		path: `${page}?/retireSupporting`,
+		form: { documentId: 'x' },
+		expect: EDITOR_ACTION
+	}
+];
+
 interface Probe {
 	method: 'GET' | 'POST' | 'PATCH' | 'PUT';
 	/**
@@ -119,7 +130,32 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 	'/products/[productId=uuid]': {
 		page: [{ method: 'GET', path: '/products/:product', expect: READ_PRODUCTS }],
 		actions: [
-			{ method: 'POST', path: '/products/:product', form: { sku: '' }, expect: EDITOR_ACTION }
+			{
+				method: 'POST',
+				path: '/products/:product?/save',
+				form: { sku: '' },
+				expect: EDITOR_ACTION
+			},
+			...SUPPORTING_ACTIONS('/products/:product')
+		]
+	},
+	// No document has this id: a 404 to everyone signed in, so ids confirm nothing.
+	'/products/[productId=uuid]/supporting/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/products/:product/supporting/00000000-0000-4000-8000-000000000000',
+				expect: { anonymous: 303, default: 404 }
+			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/supporting/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/shipments/:ship/supporting/00000000-0000-4000-8000-000000000000',
+				expect: { anonymous: 303, default: 404 }
+			}
 		]
 	},
 	'/shipments': { page: [{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 }] },
@@ -461,7 +497,8 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/shipments/:ship?/payDeposit',
 				form: { depositId: 'x' },
 				expect: { anonymous: 303, customer: 400, default: 403 }
-			}
+			},
+			...SUPPORTING_ACTIONS('/shipments/:ship')
 		]
 	},
 	// No deposit has this id: invisible to everyone signed in.
@@ -644,6 +681,16 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				method: 'GET',
 				path: '/api/v1/shipments/:ship/landed-cost?mode=rocket',
 				expect: { anonymous: 401, broker: 403, customer: 403, default: 400 }
+			}
+		]
+	},
+	'/api/v1/shipments/[shipmentId=uuid]/supporting-documents': {
+		api: [
+			{ method: 'GET', path: '/api/v1/shipments/:ship/supporting-documents', expect: API_200 },
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:otherShip/supporting-documents',
+				expect: OTHER_SHIPMENT_API
 			}
 		]
 	},

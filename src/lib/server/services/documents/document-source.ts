@@ -18,6 +18,7 @@ import { cachedLoadPlan } from '../load-plan';
 import { listLots } from '../shipment-lots';
 import { measureShipment } from '../shipment-measure';
 import { productsBySku } from '../products';
+import { currentDocumentsOfKind } from '../supporting-documents';
 import type { ShipmentLoadPlanView } from '../../../load-plan-input';
 
 /** Address purposes to print, best first: the buyer is billed, the exporter is registered. */
@@ -108,6 +109,12 @@ export async function documentSource(
 		row.palletTypeId ? PalletTypeRow.findByPk(row.palletTypeId) : null,
 		cachedLoadPlan(user, shipmentId)
 	]);
+	const today = new Date().toISOString().slice(0, 10);
+	const productIds = [...products.values()].map((p) => p.id);
+	const [un383, origin] = await Promise.all([
+		currentDocumentsOfKind('un38_3_summary', shipmentId, productIds, today),
+		currentDocumentsOfKind('proof_of_origin', shipmentId, [], today)
+	]);
 	const source: DocumentSource = {
 		reference: row.reference,
 		status: row.status,
@@ -167,7 +174,7 @@ export async function documentSource(
 				unitPrice: l.unitPrice,
 				battery: p?.batteryConfig ?? 'none',
 				batteryChemistry: p?.batteryChemistry ?? null,
-				un383OnFile: false
+				un383OnFile: un383.onShipment || (p !== undefined && un383.products.has(p.id))
 			};
 		}),
 		measure: result,
@@ -181,7 +188,7 @@ export async function documentSource(
 			serialTo: l.serialTo
 		})),
 		loadPlan: loadPlanFigures(plan),
-		proofOfOriginOnFile: false
+		proofOfOriginOnFile: origin.onShipment
 	};
 	return { source, shipmentId, exporterId: row.exporterId, version: row.version, loadPlan: plan };
 }

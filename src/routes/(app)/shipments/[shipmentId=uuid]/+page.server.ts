@@ -3,6 +3,11 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
 import { refuse } from '$lib/server/forms';
+import {
+	retireSupportingAction,
+	supportingDocumentsData,
+	uploadSupportingAction
+} from '$lib/server/supporting-document-actions';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import {
 	DEPOSIT_REQUESTERS,
@@ -113,7 +118,8 @@ export const load: PageServerLoad = async (event) => {
 		paperForm,
 		issueForm,
 		deposits,
-		depositForm
+		depositForm,
+		supporting
 	] = await Promise.all([
 		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
 		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
@@ -146,7 +152,8 @@ export const load: PageServerLoad = async (event) => {
 			},
 			zod4(depositRequestSchema),
 			{ errors: false, id: 'deposit' }
-		)
+		),
+		supportingDocumentsData(event, { shipmentId: shipment.id })
 	]);
 	// Offer the papers not yet issued; a reissue is chosen on purpose.
 	issueForm.data.kinds = DOCUMENT_KINDS.filter(
@@ -184,7 +191,8 @@ export const load: PageServerLoad = async (event) => {
 		depositForm,
 		isCustomer: user.role === 'customer',
 		canRequestDeposit: (DEPOSIT_REQUESTERS as readonly string[]).includes(user.role),
-		currencies: countryAndCurrencyOptions().currencies
+		currencies: countryAndCurrencyOptions().currencies,
+		supporting
 	};
 };
 
@@ -215,6 +223,10 @@ async function depositStep<T>(
 }
 
 export const actions: Actions = {
+	uploadSupporting: (event) =>
+		uploadSupportingAction(event, { shipmentId: event.params.shipmentId }),
+	retireSupporting: (event) =>
+		retireSupportingAction(event, { shipmentId: event.params.shipmentId }),
 	header: async (event) => {
 		const user = editor(event);
 		const form = await superValidate(event.request, zod4(shipmentSchema), { id: 'header' });

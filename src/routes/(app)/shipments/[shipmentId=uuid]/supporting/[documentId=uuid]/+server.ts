@@ -1,0 +1,11 @@
+import { supportingDownloadResponse } from '$lib/server/supporting-document-actions';
+import type { RequestHandler } from './$types';
+
+// A supporting document of the shipment, as an attachment; scoped like the shipment, logged.
+export const GET: RequestHandler = (event) =>
+	supportingDownloadResponse(
+		event,
+		{ shipmentId: event.params.shipmentId },
+		event.params.documentId,
+		'file'
+	);
