@@ -73,7 +73,13 @@ export async function supportingDownloadResponse(
 	documentId: string,
 	via: 'file' | 'api'
 ): Promise<Response> {
-	const file = await downloadSupportingDocument(requireUser(event), owner, documentId, via);
+	const file = await downloadSupportingDocument(
+		requireUser(event),
+		owner,
+		documentId,
+		via,
+		event.getClientAddress()
+	);
 	if (!file) error(404, { message: 'No such document is visible to you.', code: 'not_found' });
 	return new Response(new Uint8Array(file.content), {
 		headers: {
