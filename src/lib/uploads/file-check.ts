@@ -43,6 +43,7 @@ export function detectUploadType(bytes: Uint8Array): UploadType | null {
 }
 
 /** Characters no file name keeps: path separators, Windows-reserved, control characters. */
+// eslint-disable-next-line no-control-regex -- removing control characters is the point
 const RESERVED = /[<>:"/\\|?*\u0000-\u001f\u007f-\u009f]/g;
 /** Bidirectional overrides and zero-width characters: they can disguise "exe.pdf" as "fdp.exe". */
 const INVISIBLE = /[\u200b-\u200f\u202a-\u202e\u2060-\u2069\ufeff]/g;
@@ -70,7 +71,10 @@ export function sanitizeFileName(name: string, type: UploadType): string {
 	let stem = cleaned.replace(/\.[A-Za-z0-9]{1,5}$/, '').replace(/[.\s]+$/, '') || 'document';
 	if (WINDOWS_DEVICE.test(stem)) stem = `${stem}-file`;
 	const ext = `.${UPLOAD_EXTENSIONS[type]}`;
-	return `${[...stem].slice(0, MAX_FILE_NAME_LENGTH - ext.length).join('').trim()}${ext}`;
+	return `${[...stem]
+		.slice(0, MAX_FILE_NAME_LENGTH - ext.length)
+		.join('')
+		.trim()}${ext}`;
 }
 
 export type UploadCheck =

@@ -18,8 +18,7 @@ export interface DocumentExpiringNotice {
 	daysLeft: number;
 	/** What it is filed on: a shipment (reference) or a product (SKU). */
 	owner:
-		| { shipmentId: string; shipmentReference: string }
-		| { productId: string; productSku: string };
+		{ shipmentId: string; shipmentReference: string } | { productId: string; productSku: string };
 	/** Who uploaded it (null when that account was removed); the outbox decides who else hears. */
 	uploadedByUserId: string | null;
 	/** Path inside Landfall to the card that holds it, e.g. '/products/…#supporting-documents-heading'. */

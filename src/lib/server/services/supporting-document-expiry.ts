@@ -101,10 +101,10 @@ export async function sendExpiryReminders(
 			{ replacements: { today, withinDays }, transaction, type: QueryTypes.SELECT }
 		);
 		if (picked.length === 0) return [];
-		await db().query(
-			`UPDATE supporting_documents SET reminder_sent_at = :now WHERE id IN (:ids)`,
-			{ replacements: { now, ids: picked.map((d) => d.id) }, transaction }
-		);
+		await db().query(`UPDATE supporting_documents SET reminder_sent_at = :now WHERE id IN (:ids)`, {
+			replacements: { now, ids: picked.map((d) => d.id) },
+			transaction
+		});
 		const notices = picked.map((d) => notice(d, today));
 		for (const n of notices) await documentExpiring(transaction, n);
 		return notices;
