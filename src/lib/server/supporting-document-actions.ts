@@ -12,7 +12,7 @@ import {
 	type DocumentOwner
 } from './services/supporting-documents';
 import { canEditShipments } from './services/shipment-scope';
-import { MAX_UPLOAD_BYTES } from '../uploads/file-check';
+import { MAX_UPLOAD_BYTES, tooLargeMessage } from '../uploads/file-check';
 
 /**
  * The largest upload request read: the 10 MiB file plus the form's other fields and multipart
@@ -20,12 +20,11 @@ import { MAX_UPLOAD_BYTES } from '../uploads/file-check';
  * the server reads such a body at all; anything larger is refused here with a field error.
  */
 const MAX_UPLOAD_REQUEST_BYTES = MAX_UPLOAD_BYTES + 512 * 1024;
-const TOO_LARGE = 'The file is over 10 MB; at most 10 MB is accepted.';
 
 /** A 413 with the error on the file field, for a body too large to read. */
 async function tooLarge() {
 	const form = await superValidate(zod4(supportingUploadSchema), { id: 'supporting-upload' });
-	return withFiles(setError(form, 'file', TOO_LARGE, { status: 413 }));
+	return withFiles(setError(form, 'file', tooLargeMessage(MAX_UPLOAD_BYTES + 1), { status: 413 }));
 }
 
 // The supporting-documents card's load data and form actions, shared by the shipment and the

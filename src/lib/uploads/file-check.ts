@@ -82,6 +82,13 @@ export type UploadCheck =
 
 const MIB = 1024 * 1024;
 
+/** "The file is 11.0 MB; …", or "over 10 MB" when one decimal would round it down to 10.0. */
+export function tooLargeMessage(size: number): string {
+	const mb = (size / MIB).toFixed(1);
+	const limit = MAX_UPLOAD_BYTES / MIB;
+	return `The file is ${Number(mb) > limit ? `${mb} MB` : `over ${limit} MB`}; at most ${limit} MB is accepted.`;
+}
+
 export interface UploadCandidate {
 	/** The name the browser sent; only cleaned and kept for display and download. */
 	name: string;
@@ -93,11 +100,7 @@ export interface UploadCandidate {
 /** Checks an upload's size and content; the message is written for the form's file field. */
 export function checkUpload({ name, bytes }: UploadCandidate): UploadCheck {
 	if (bytes.length === 0) return { ok: false, message: 'The file is empty.' };
-	if (bytes.length > MAX_UPLOAD_BYTES)
-		return {
-			ok: false,
-			message: `The file is ${(bytes.length / MIB).toFixed(1)} MB; at most ${MAX_UPLOAD_BYTES / MIB} MB is accepted.`
-		};
+	if (bytes.length > MAX_UPLOAD_BYTES) return { ok: false, message: tooLargeMessage(bytes.length) };
 	const type = detectUploadType(bytes);
 	if (!type)
 		return {
