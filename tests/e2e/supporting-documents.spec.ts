@@ -36,8 +36,11 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 	});
 	await docs.getByRole('button', { name: 'Add the document' }).click();
 	const file = docs.getByLabel('File');
-	await expect(docs.getByText(/Only PDF, PNG or JPEG files are accepted/)).toBeVisible();
+	await expect(docs.getByRole('alert')).toHaveText('The file was not added: see the file field.');
 	await expect(file).toHaveAttribute('aria-invalid', 'true');
+	await expect(file).toHaveAccessibleDescription(
+		/Only PDF, PNG or JPEG files are accepted, and by its content this file is none of them\./
+	);
 	await expect(docs.getByRole('table', { name: 'Supporting documents on file' })).toHaveCount(0);
 
 	// The real PDF, with a path in its name.

@@ -151,7 +151,8 @@ export async function uploadSupportingDocument(
 	if (!canEditShipments(user))
 		return refused(403, 'Only coordinators and administrators add supporting documents.');
 	const check = checkUpload({ name: input.fileName, bytes: input.bytes });
-	if (!check.ok) return invalid({ file: check.message }, check.message);
+	if (!check.ok)
+		return invalid({ file: check.message }, 'The file was not added: see the file field.');
 	if (input.issuedOn && input.expiresOn && input.expiresOn < input.issuedOn)
 		return invalid({ expiresOn: 'The expiry date is before the date of issue.' });
 	if (!(await ownerVisible(user, owner)))
