@@ -13,6 +13,7 @@ import {
 } from './services/supporting-documents';
 import { canEditShipments } from './services/shipment-scope';
 import { MAX_UPLOAD_BYTES, tooLargeMessage } from '../uploads/file-check';
+import type { SupportingKind } from '../uploads/document-kinds';
 
 /**
  * The largest upload request read: the 10 MiB file plus the form's other fields and multipart
@@ -24,6 +25,7 @@ const MAX_UPLOAD_REQUEST_BYTES = MAX_UPLOAD_BYTES + 512 * 1024;
 /** A 413 with the error on the file field, for a body too large to read. */
 async function tooLarge() {
 	const form = await superValidate(zod4(supportingUploadSchema), { id: 'supporting-upload' });
+	form.data.kind = '' as SupportingKind;
 	return withFiles(setError(form, 'file', tooLargeMessage(MAX_UPLOAD_BYTES + 1), { status: 413 }));
 }
 
@@ -36,6 +38,9 @@ export async function supportingDocumentsData(event: RequestEvent, owner: Docume
 		listSupportingDocuments(user, owner),
 		superValidate(zod4(supportingUploadSchema), { id: 'supporting-upload' })
 	]);
+	// No kind chosen until the user picks one (superforms would start at the enum's first value,
+	// and a document filed as a UN38.3 summary by mistake would satisfy the readiness check).
+	uploadForm.data.kind = '' as SupportingKind;
 	return { documents: documents ?? [], uploadForm, canUpload: canEditShipments(user) };
 }
 
