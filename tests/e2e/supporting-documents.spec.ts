@@ -1,13 +1,14 @@
 import { createHash } from 'node:crypto';
 import { expect, test } from '@playwright/test';
 import { apiAs, DEMO, signInPage } from './helpers';
-import { createDraftShipment, region } from './shipment-steps';
+import { region } from './shipment-steps';
 
 // Supporting documents on a shipment: a coordinator uploads a PDF, sees it listed and downloads
 // it (the same bytes, as an attachment under the cleaned name, logged); a file that is no PDF,
 // PNG or JPEG by content is refused on the file field, whatever its name; a body over the limit
 // is a 413 with that field's error, not a 500; the shipment's customer sees the document and
-// another customer gets a 404.
+// another customer gets a 404. Uses the seeded draft SHP-2026-00002 (Wattlebird): an empty draft
+// of its own would be the newest shipment, which other specs open first and expect lines in.
 
 /** A small PDF: the server checks the magic bytes, not a full parse. */
 const PDF = Buffer.from(
@@ -21,30 +22,32 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 }) => {
 	test.setTimeout(90_000);
 	await signInPage(page, DEMO.coordinator);
-	const { url } = await createDraftShipment(page);
-	const shipmentId = url.split('/').pop()!;
+	await page.goto('/shipments');
+	await page.getByRole('link', { name: 'SHP-2026-00002' }).click();
+	await expect(page).toHaveURL(/\/shipments\/[0-9a-f-]{36}$/);
+	const shipmentId = page.url().split('/').pop()!;
+	const title = `Certificate of origin, chamber copy ${Date.now()}`;
 	const docs = region(page, 'Supporting documents');
-	await expect(docs.getByText('No documents on file.')).toBeVisible();
 
 	// Wrong type by content: a Windows executable named .pdf and declared as a PDF.
 	await docs.getByLabel('Kind').selectOption({ label: 'Proof of origin' });
-	await docs.getByLabel('Title').fill('Certificate of origin, chamber copy');
-	await docs.getByLabel('File').setInputFiles({
+	await docs.getByLabel('Title').fill(title);
+	await docs.getByLabel('File', { exact: true }).setInputFiles({
 		name: 'certificate.pdf',
 		mimeType: 'application/pdf',
 		buffer: Buffer.from([0x4d, 0x5a, 0x90, 0x00, 0x03, 0x00, 0x00, 0x00])
 	});
 	await docs.getByRole('button', { name: 'Add the document' }).click();
-	const file = docs.getByLabel('File');
+	const file = docs.getByLabel('File', { exact: true });
 	await expect(docs.getByRole('alert')).toHaveText('The file was not added: see the file field.');
 	await expect(file).toHaveAttribute('aria-invalid', 'true');
 	await expect(file).toHaveAccessibleDescription(
 		/Only PDF, PNG or JPEG files are accepted, and by its content this file is none of them\./
 	);
-	await expect(docs.getByRole('table', { name: 'Supporting documents on file' })).toHaveCount(0);
+	await expect(docs.getByText(title)).toHaveCount(0);
 
 	// The real PDF, with a path in its name.
-	await docs.getByLabel('Title').fill('Certificate of origin, chamber copy');
+	await docs.getByLabel('Title').fill(title);
 	await docs.getByLabel('Valid until (optional)').fill('2030-12-31');
 	await file.setInputFiles({
 		name: '../../etc/certificate of origin.pdf',
@@ -56,7 +59,7 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 		docs.getByText('Added certificate of origin.pdf to the documents on file.')
 	).toBeVisible();
 	const table = docs.getByRole('table', { name: 'Supporting documents on file' });
-	const row = table.getByRole('row', { name: /Certificate of origin, chamber copy/ });
+	const row = table.getByRole('row', { name: new RegExp(title) });
 	await expect(row).toContainText('Proof of origin');
 	await expect(row).toContainText('2030-12-31');
 
@@ -72,9 +75,10 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 	// The JSON list (no content), and the download counted there.
 	const listed = (await (
 		await page.request.get(`/api/v1/shipments/${shipmentId}/supporting-documents`)
-	).json()) as { documents: { id: string; fileName: string; downloads: number; sha256: string }[] };
-	expect(listed.documents).toHaveLength(1);
-	const [doc] = listed.documents;
+	).json()) as {
+		documents: { id: string; title: string; fileName: string; downloads: number; sha256: string }[];
+	};
+	const doc = listed.documents.find((d) => d.title === title);
 	expect(doc).toMatchObject({
 		fileName: 'certificate of origin.pdf',
 		downloads: 1,
@@ -92,14 +96,14 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 		/^attachment; filename="certificate of origin\.pdf"/
 	);
 
-	// The shipment's customer (Hallvik) may download it; another customer gets a 404.
-	const hallvik = await apiAs(baseURL!, DEMO.customer);
-	expect((await hallvik.get(href)).status()).toBe(200);
+	// The shipment's customer (Wattlebird) may download it; another customer gets a 404.
 	const wattlebird = await apiAs(baseURL!, DEMO.otherCustomer);
-	expect((await wattlebird.get(href)).status()).toBe(404);
-	expect(
-		(await wattlebird.get(`/api/v1/shipments/${shipmentId}/supporting-documents`)).status()
-	).toBe(404);
+	expect((await wattlebird.get(href)).status()).toBe(200);
+	const hallvik = await apiAs(baseURL!, DEMO.customer);
+	expect((await hallvik.get(href)).status()).toBe(404);
+	expect((await hallvik.get(`/api/v1/shipments/${shipmentId}/supporting-documents`)).status()).toBe(
+		404
+	);
 
 	// A body over the limit is refused with the file field's error (413), never a 500.
 	const big = Buffer.alloc(11 * 1024 * 1024);
@@ -128,7 +132,7 @@ test('a file picked over 10 MB is refused before it is sent', async ({ page }) =
 	const big = Buffer.alloc(10 * 1024 * 1024 + 1);
 	PDF.copy(big);
 	await docs
-		.getByLabel('File')
+		.getByLabel('File', { exact: true })
 		.setInputFiles({ name: 'big.pdf', mimeType: 'application/pdf', buffer: big });
 	await expect(docs.getByText('The file is over 10 MB; at most 10 MB is accepted.')).toBeVisible();
 });
