@@ -701,6 +701,20 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			}
 		]
 	},
+	'/api/v1/shipments/[shipmentId=uuid]/supporting-documents/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:ship/supporting-documents/00000000-0000-4000-8000-000000000000',
+				expect: { anonymous: 401, default: 404 }
+			},
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:cedar/supporting-documents/:cedarSupport',
+				expect: OTHER_SHIPMENT_API
+			}
+		]
+	},
 	'/api/v1/shipments/[shipmentId=uuid]/deposits': {
 		api: [
 			{

@@ -96,6 +96,14 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 		/^attachment; filename="certificate of origin\.pdf"/
 	);
 
+	// The same file through the API, logged as an API download.
+	const viaApi = await page.request.get(
+		`/api/v1/shipments/${shipmentId}/supporting-documents/${doc!.id}`
+	);
+	expect(viaApi.status()).toBe(200);
+	expect(viaApi.headers()['x-landfall-sha256']).toBe(sha256(PDF));
+	expect(sha256(await viaApi.body())).toBe(sha256(PDF));
+
 	// The shipment's customer (Wattlebird) may download it; another customer gets a 404.
 	const wattlebird = await apiAs(baseURL!, DEMO.otherCustomer);
 	expect((await wattlebird.get(href)).status()).toBe(200);
