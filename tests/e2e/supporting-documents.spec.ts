@@ -42,7 +42,7 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 	await expect(docs.getByRole('alert')).toHaveText('The file was not added: see the file field.');
 	await expect(file).toHaveAttribute('aria-invalid', 'true');
 	await expect(file).toHaveAccessibleDescription(
-		/Only PDF, PNG or JPEG files are accepted, and by its content this file is none of them\./
+		/Only PDF, PNG or JPEG files are accepted, and this file is none of them\./
 	);
 	await expect(docs.getByText(title)).toHaveCount(0);
 

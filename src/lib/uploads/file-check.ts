@@ -105,8 +105,7 @@ export function checkUpload({ name, bytes }: UploadCandidate): UploadCheck {
 	if (!type)
 		return {
 			ok: false,
-			message:
-				'Only PDF, PNG or JPEG files are accepted, and by its content this file is none of them.'
+			message: 'Only PDF, PNG or JPEG files are accepted, and this file is none of them.'
 		};
 	return { ok: true, type, fileName: sanitizeFileName(name, type), size: bytes.length };
 }
