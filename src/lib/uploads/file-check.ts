@@ -45,7 +45,7 @@ export function detectUploadType(bytes: Uint8Array): UploadType | null {
 /** Characters no file name keeps: path separators, Windows-reserved, control characters. */
 // eslint-disable-next-line no-control-regex -- removing control characters is the point
 const RESERVED = /[<>:"/\\|?*\u0000-\u001f\u007f-\u009f]/g;
-/** Bidirectional overrides and zero-width characters: they can disguise "exe.pdf" as "fdp.exe". */
+/** Bidirectional overrides and zero-width characters: "a\u202Efdp.exe" would show as "aexe.pdf". */
 const INVISIBLE = /[\u200b-\u200f\u202a-\u202e\u2060-\u2069\ufeff]/g;
 /** Device names Windows will not open as files, with or without an extension. */
 const WINDOWS_DEVICE = /^(con|prn|aux|nul|com\d|lpt\d)$/i;
