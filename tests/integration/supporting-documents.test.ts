@@ -151,6 +151,10 @@ describe('what an upload may be', () => {
 			ok: false,
 			status: 403
 		});
+		expect(await upload({ shipmentId: ship.hallvik }, {}, hallvikBuyer)).toMatchObject({
+			ok: false,
+			status: 403
+		});
 		expect(await upload({ shipmentId: crypto.randomUUID() })).toMatchObject({
 			ok: false,
 			status: 404

@@ -11,28 +11,29 @@
  *   rules, the buyer otherwise (common practice: the sales contract and the carriage contract
  *   may say otherwise, e.g. destination terminal handling included in a C-rule freight).
  */
+import { incotermObligations } from '../trade/incoterm-obligations';
 import type { IncotermCode } from '../trade/incoterms';
 import type { CostKey, Party } from './types';
 
-const E_OR_F: ReadonlySet<IncotermCode> = new Set(['EXW', 'FCA', 'FAS', 'FOB']);
-const D_RULES: ReadonlySet<IncotermCode> = new Set(['DAP', 'DPU', 'DDP']);
-
+/** Read from the Incoterms obligations table (`trade/incoterm-obligations.ts`). */
 export function bearer(key: CostKey, rule: IncotermCode): Party {
+	const o = incotermObligations(rule);
 	switch (key) {
 		case 'goods':
 			return 'buyer';
 		case 'originCharges':
-			return rule === 'EXW' ? 'buyer' : 'seller';
+			return o.exportClearance;
 		case 'freight':
-			return E_OR_F.has(rule) ? 'buyer' : 'seller';
+			return o.mainCarriage;
 		case 'insurance':
-			return rule === 'CIF' || rule === 'CIP' || D_RULES.has(rule) ? 'seller' : 'buyer';
+			return o.insuranceDuty !== 'none' || o.riskPassesAtDestination ? 'seller' : 'buyer';
 		case 'duty':
 		case 'vat':
+			return o.importDuty;
 		case 'fees':
 		case 'brokerage':
-			return rule === 'DDP' ? 'seller' : 'buyer';
+			return o.importClearance;
 		case 'destinationCharges':
-			return D_RULES.has(rule) ? 'seller' : 'buyer';
+			return o.family === 'D' ? 'seller' : 'buyer';
 	}
 }

@@ -16,6 +16,7 @@
  *
  * Pure module: no framework imports.
  */
+import { incotermObligations, type InsuranceDuty } from './incoterm-obligations';
 import type { IncotermCode } from './incoterms';
 
 /** 'included': in the price and printed; 'excluded': the buyer's cost; 'optional': printed if any. */
@@ -30,51 +31,21 @@ export interface IncotermCosts {
 	minimumCover: string | null;
 }
 
-const NONE: IncotermCosts = Object.freeze({
-	freight: 'excluded',
-	insurance: 'excluded',
-	sellerMustInsure: false,
-	minimumCover: null
+const COVER: Readonly<Record<InsuranceDuty, string | null>> = Object.freeze({
+	none: null,
+	icc_c: 'Institute Cargo Clauses (C), price + 10 %',
+	icc_a: 'Institute Cargo Clauses (A), price + 10 %'
 });
 
-const CARRIAGE_ONLY: IncotermCosts = Object.freeze({
-	freight: 'included',
-	insurance: 'excluded',
-	sellerMustInsure: false,
-	minimumCover: null
-});
-
-const DELIVERED: IncotermCosts = Object.freeze({
-	freight: 'included',
-	insurance: 'optional',
-	sellerMustInsure: false,
-	minimumCover: null
-});
-
-const COSTS: Readonly<Record<IncotermCode, IncotermCosts>> = Object.freeze({
-	EXW: NONE,
-	FCA: NONE,
-	FAS: NONE,
-	FOB: NONE,
-	CPT: CARRIAGE_ONLY,
-	CFR: CARRIAGE_ONLY,
-	CIF: Object.freeze({
-		freight: 'included',
-		insurance: 'included',
-		sellerMustInsure: true,
-		minimumCover: 'Institute Cargo Clauses (C), price + 10 %'
-	}),
-	CIP: Object.freeze({
-		freight: 'included',
-		insurance: 'included',
-		sellerMustInsure: true,
-		minimumCover: 'Institute Cargo Clauses (A), price + 10 %'
-	}),
-	DAP: DELIVERED,
-	DPU: DELIVERED,
-	DDP: DELIVERED
-});
-
+/** Derived from `incoterm-obligations.ts`, the one table of who pays what. */
 export function incotermCosts(code: IncotermCode): IncotermCosts {
-	return COSTS[code];
+	const o = incotermObligations(code);
+	const mustInsure = o.insuranceDuty !== 'none';
+	return {
+		freight: o.mainCarriage === 'seller' ? 'included' : 'excluded',
+		// D rules: the seller carries the risk to the destination and may insure; no duty (A5).
+		insurance: mustInsure ? 'included' : o.riskPassesAtDestination ? 'optional' : 'excluded',
+		sellerMustInsure: mustInsure,
+		minimumCover: COVER[o.insuranceDuty]
+	};
 }

@@ -67,7 +67,17 @@ describe('trade index', () => {
 				'INCOTERM_CODES',
 				'formatIncotermWithPlace',
 				'incoterm',
-				'isIncoterm'
+				'isIncoterm',
+				// incoterm-obligations, incoterm-costs, incoterm-checks, responsibility-matrix
+				'INCOTERM_OBLIGATIONS',
+				'INCOTERM_OBLIGATIONS_SOURCE',
+				'INSURANCE_DUTY_TEXT',
+				'incotermObligations',
+				'incotermCosts',
+				'ANY_MODE_EQUIVALENT',
+				'incotermChecks',
+				'RESPONSIBILITY_LABELS',
+				'responsibilityMatrix'
 			].sort()
 		);
 	});
