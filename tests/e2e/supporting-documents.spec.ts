@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
 import { apiAs, DEMO, signInPage } from './helpers';
 import { region } from './shipment-steps';
@@ -69,7 +70,6 @@ test('a coordinator uploads a PDF on a shipment, sees it listed and downloads it
 	]);
 	expect(download.suggestedFilename()).toBe('certificate of origin.pdf');
 	const path = await download.path();
-	const { readFile } = await import('node:fs/promises');
 	expect(sha256(await readFile(path))).toBe(sha256(PDF));
 
 	// The JSON list (no content), and the download counted there.
