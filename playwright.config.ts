@@ -6,6 +6,10 @@ const baseURL = `http://127.0.0.1:${PORT}`;
 const chromium = process.env.CHROMIUM_PATH ?? '/usr/lib/chromium/chromium';
 // The local Stripe fake the app pays through in these tests (scripts/stripe-fake).
 const FAKE_PORT = process.env.STRIPE_FAKE_PORT ?? '12111';
+// The local SMTP catcher the app sends its mail to (scripts/mail-catcher); tests read its JSON API.
+const SMTP_PORT = process.env.MAIL_CATCHER_SMTP_PORT ?? '12570';
+const MAIL_WEB_PORT = process.env.MAIL_CATCHER_WEB_PORT ?? '12571';
+const MAIL_CATCHER_URL = `http://127.0.0.1:${MAIL_WEB_PORT}`;
 const stripe = {
 	STRIPE_SECRET_KEY: 'sk_test_landfall_e2e',
 	STRIPE_WEBHOOK_SECRET: 'whsec_landfall_e2e'
@@ -52,6 +56,14 @@ export default defineConfig({
 			}
 		},
 		{
+			command: 'node --import tsx scripts/mail-catcher/main.ts',
+			url: `${MAIL_CATCHER_URL}/health`,
+			timeout: 30_000,
+			reuseExistingServer: false,
+			stdout: 'pipe',
+			env: { MAIL_CATCHER_SMTP_PORT: SMTP_PORT, MAIL_CATCHER_WEB_PORT: MAIL_WEB_PORT }
+		},
+		{
 			command: 'node build',
 			url: `${baseURL}/api/health`,
 			timeout: 60_000,
@@ -67,7 +79,11 @@ export default defineConfig({
 				...stripe,
 				STRIPE_API_HOST: '127.0.0.1',
 				STRIPE_API_PORT: FAKE_PORT,
-				STRIPE_API_PROTOCOL: 'http'
+				STRIPE_API_PROTOCOL: 'http',
+				SMTP_HOST: '127.0.0.1',
+				SMTP_PORT,
+				MAIL_POLL_MS: '300',
+				MAIL_RETRY_BASE_MS: '1000'
 			}
 		}
 	]

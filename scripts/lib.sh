@@ -97,3 +97,38 @@ stop_stripe_fake() {
 		STRIPE_FAKE_PID=
 	fi
 }
+
+# E-mail: the local SMTP catcher (scripts/mail-catcher) on loopback, unless a real SMTP server is
+# configured (SMTP_HOST set to anything but loopback). Exports SMTP_HOST/SMTP_PORT for the app;
+# caught mail is kept in .data/mail-catcher.json and shown at MAIL_CATCHER_URL.
+start_mail_catcher() {
+	if [[ -n ${SMTP_HOST:-} && ${SMTP_HOST} != 127.0.0.1 && ${SMTP_HOST} != localhost ]]; then
+		say "E-mail: the SMTP server at $SMTP_HOST (SMTP_HOST is set)"
+		return 0
+	fi
+	export MAIL_CATCHER_SMTP_PORT=${MAIL_CATCHER_SMTP_PORT:-${SMTP_PORT:-4325}}
+	export MAIL_CATCHER_WEB_PORT=${MAIL_CATCHER_WEB_PORT:-4326}
+	export MAIL_CATCHER_FILE=${MAIL_CATCHER_FILE:-$REPO_ROOT/.data/mail-catcher.json}
+	export SMTP_HOST=127.0.0.1 SMTP_PORT=$MAIL_CATCHER_SMTP_PORT SMTP_SECURE=false
+	MAIL_CATCHER_URL=http://127.0.0.1:$MAIL_CATCHER_WEB_PORT
+	say "Starting the local mail catcher (SMTP 127.0.0.1:$MAIL_CATCHER_SMTP_PORT, web $MAIL_CATCHER_URL)"
+	node --import tsx scripts/mail-catcher/main.ts &
+	MAIL_CATCHER_PID=$!
+	local i
+	for i in $(seq 1 50); do
+		node -e "fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" \
+			"$MAIL_CATCHER_URL/health" && return 0
+		kill -0 "$MAIL_CATCHER_PID" 2>/dev/null || break
+		sleep 0.2
+	done
+	echo "The local mail catcher did not start on ports $MAIL_CATCHER_SMTP_PORT/$MAIL_CATCHER_WEB_PORT (is a port taken?)." >&2
+	exit 1
+}
+
+stop_mail_catcher() {
+	if [[ -n ${MAIL_CATCHER_PID:-} ]]; then
+		kill "$MAIL_CATCHER_PID" 2>/dev/null || true
+		wait "$MAIL_CATCHER_PID" 2>/dev/null || true
+		MAIL_CATCHER_PID=
+	fi
+}

@@ -21,13 +21,19 @@ say "Starting PostgreSQL ($LANDFALL_PG_NAME cluster, port $LANDFALL_PG_PORT)"
 bash scripts/pg.sh start
 DATABASE_URL=${DATABASE_URL:-$(bash scripts/pg.sh url)}
 export DATABASE_URL
-trap 'stop_stripe_fake; bash scripts/pg.sh stop' EXIT
+trap 'stop_mail_catcher; stop_stripe_fake; bash scripts/pg.sh stop' EXIT
 
 say "Migrating and seeding the demo"
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx scripts/seed.ts
 ensure_build
 start_stripe_fake
+start_mail_catcher
+# ${X:+…}${X:-…} would print the process id when X is set: choose the words first.
+payments_line="Stripe (test mode keys from .env)"
+[[ -n ${STRIPE_FAKE_PID:-} ]] && payments_line="the local Stripe fake at http://127.0.0.1:$STRIPE_FAKE_PORT"
+mail_line="sent through $SMTP_HOST:${SMTP_PORT:-}"
+[[ -n ${MAIL_CATCHER_PID:-} ]] && mail_line="nothing leaves this machine; read the caught mail at $MAIL_CATCHER_URL"
 
 cat >&2 <<MSG
 
@@ -39,9 +45,10 @@ cat >&2 <<MSG
     broker@kaaiman.example       customs broker
     buyer@hallvik.example        customer (Hallvik Heimtechnik, DE)
     buyer@wattlebird.example     customer (Wattlebird Home Retail, AU)
-  Card payments: ${STRIPE_FAKE_PID:+the local Stripe fake at http://127.0.0.1:$STRIPE_FAKE_PORT}${STRIPE_FAKE_PID:-Stripe (test mode keys from .env)}
+  Card payments: $payments_line
     test cards on its page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
-  Press Ctrl-C to stop the app, the payment fake and the database.
+  E-mail: $mail_line
+  Press Ctrl-C to stop the app, the payment fake, the mail catcher and the database.
 
 MSG
 node build

@@ -10,7 +10,9 @@ import {
 } from '$lib/server/auth/session-cache';
 import { env } from '$env/dynamic/private';
 import { extraPolicy } from '$lib/server/content-security';
+import { building } from '$app/environment';
 import { db } from '$lib/server/db';
+import { startMailDispatcher, stopMailDispatcher } from '$lib/server/mail';
 import { userForToken } from '$lib/server/services/api-tokens';
 
 /** Pages and endpoints anyone may reach. Everything else needs a session. */
@@ -20,9 +22,11 @@ const PUBLIC_PATHS = new Set(['/signin', '/api/health', '/api/v1/stripe/webhook'
 export const init: ServerInit = async () => {
 	// Fail at start-up, not on the first request, when the database is unreachable or misconfigured.
 	await db().authenticate();
+	// The outbox's dispatcher runs in the app process; the build starts none.
+	if (!building) startMailDispatcher();
 	// adapter-node emits this after SIGINT/SIGTERM once requests are done; the open pool
 	// would otherwise keep the process alive.
-	process.once('sveltekit:shutdown', () => void db().close());
+	process.once('sveltekit:shutdown', () => void stopMailDispatcher().then(() => db().close()));
 };
 
 // Auth.js's own HTTP endpoints stay closed: sign-in goes through our form action only.
@@ -59,7 +63,8 @@ const loadUser: Handle = async ({ event, resolve }) => {
 // Whole-area checks; every load, action and endpoint checks its role again where the data is.
 const guardAreas: Handle = ({ event, resolve }) => {
 	const { pathname } = event.url;
-	if (PUBLIC_PATHS.has(pathname)) return resolve(event);
+	// An invitation's set-password link proves itself with its token (checked in the page).
+	if (PUBLIC_PATHS.has(pathname) || pathname.startsWith('/set-password/')) return resolve(event);
 	const user = event.locals.user;
 	if (!user && isApiPath(pathname)) {
 		return json(

@@ -85,7 +85,8 @@ export function navigationFor(role: Role, organizationId: string): NavItem[] {
 				trace,
 				{ href: '/organizations', label: 'Organizations' },
 				{ href: '/admin/users', label: 'People & access' },
-				{ href: '/admin/audit', label: 'Audit trail' }
+				{ href: '/admin/audit', label: 'Audit trail' },
+				{ href: '/admin/mail', label: 'Outgoing mail' }
 			];
 		case 'coordinator':
 			return [

@@ -22,11 +22,24 @@ test('sign-in page, also with errors shown', async ({ page }) => {
 	await expectAccessible(page, '/signin with field errors');
 });
 
+test('the set-password page of an unknown or used invitation', async ({ page }) => {
+	await page.goto('/set-password/not-a-real-invitation-token-0000');
+	await expect(page.getByRole('alert')).toHaveText(/no longer valid/);
+	await expectAccessible(page, '/set-password (invalid link)');
+});
+
 test('every page an administrator sees', async ({ page }) => {
 	test.setTimeout(120_000);
 	await signInPage(page, DEMO.admin);
 	await expect(page).toHaveURL('/');
-	for (const path of ['/', '/organizations', '/admin/users', '/admin/audit', '/signout']) {
+	for (const path of [
+		'/',
+		'/organizations',
+		'/admin/users',
+		'/admin/audit',
+		'/admin/mail',
+		'/signout'
+	]) {
 		await page.goto(path);
 		await expectAccessible(page, path);
 	}

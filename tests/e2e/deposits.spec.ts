@@ -1,5 +1,6 @@
+import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { DEMO, apiAs, signInPage } from './helpers';
+import { DEMO, DEMO_PASSWORD, apiAs, caughtMail, linkIn, signInPage } from './helpers';
 
 // Freight deposits with the local Stripe fake (started by playwright.config.ts): finance asks
 // Hallvik for a deposit; Hallvik's buyer pays on the fake's test payment page and comes back;
@@ -107,4 +108,61 @@ test('a declined card shows a clear message and leaves the deposit unpaid', asyn
 	const unpaid = await buyerRow(page, note);
 	await expect(unpaid).toContainText('Requested');
 	await expect(unpaid.getByRole('button', { name: /^Pay / })).toBeVisible();
+});
+
+test('the deposit request arrives by e-mail; its link leads to payment, and the receipt follows by e-mail', async ({
+	browser,
+	page
+}) => {
+	const note = `E2E mailed ${Date.now()}`;
+	await requestDeposit(browser, '715.00', note);
+
+	// The request notice, read from the mail catcher.
+	const request = await caughtMail(DEMO.customer, (m) => m.text.includes(note));
+	expect(request.subject).toMatch(/^Freight deposit of [A-Z]{3} 715\.00 for shipment /);
+	expect(request.text).toContain('not a final invoice');
+	const payLink = linkIn(request, 'Pay the deposit');
+	expect(payLink).toContain(`/shipments/${shipmentId}`);
+
+	// Following it signs the customer in first, then lands on the shipment.
+	await page.goto(payLink);
+	await expect(page).toHaveURL(/\/signin/);
+	await page.getByLabel('E-mail').fill(DEMO.customer);
+	await page.getByLabel('Password').fill(DEMO_PASSWORD);
+	await page.getByRole('button', { name: 'Sign in' }).click();
+	await expect(page).toHaveURL(new RegExp(`/shipments/${shipmentId}`));
+	const row = page
+		.getByRole('table', { name: 'Freight deposits' })
+		.getByRole('row')
+		.filter({ hasText: note });
+	await row.getByRole('button', { name: /^Pay / }).click();
+	await fillCard(page, '4242 4242 4242 4242');
+	await expect(page.getByRole('heading', { name: 'Thank you' })).toBeVisible();
+	await expect(async () => {
+		await page.reload();
+		await expect(page.getByText('The payment has been received.')).toBeVisible({ timeout: 1000 });
+	}).toPass({ timeout: 20_000 });
+
+	// The receipt e-mail, once the webhook has marked the deposit paid.
+	const receipt = await caughtMail(
+		DEMO.customer,
+		(m) =>
+			/^Receipt: [A-Z]{3} 715\.00 /.test(m.subject) && m.text.includes(`/shipments/${shipmentId}/`)
+	);
+	expect(receipt.text).toMatch(/Payment reference: pi_\w+/);
+	await page.goto(linkIn(receipt, 'View the receipt'));
+	await expect(page.getByRole('heading', { name: 'Receipt' })).toBeVisible();
+	await expect(page.getByTestId('receipt-amount')).toHaveText(/^[A-Z]{3} 715\.00$/);
+	await expect(page.getByTestId('receipt-reference')).toHaveText(/^pi_/);
+	// WCAG 2.1 A/AA through axe, as in accessibility.spec.ts: nothing serious or critical.
+	const axe = await new AxeBuilder({ page })
+		.withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'])
+		.analyze();
+	expect(axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')).toEqual(
+		[]
+	);
+
+	// The panel links the receipt too.
+	const paidRow = await buyerRow(page, note);
+	await expect(paidRow.getByRole('link', { name: /Receipt/ })).toBeVisible();
 });

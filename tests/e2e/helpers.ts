@@ -40,3 +40,36 @@ export async function apiAs(baseURL: string, email: string | null): Promise<APIR
 	}
 	return context;
 }
+
+/** The local mail catcher playwright.config.ts starts (scripts/mail-catcher); its JSON API. */
+export const MAIL_CATCHER_URL = `http://127.0.0.1:${process.env.MAIL_CATCHER_WEB_PORT ?? '12571'}`;
+
+export interface CaughtMail {
+	id: string;
+	envelope: { to: string[] };
+	subject: string;
+	text: string;
+	html: string | null;
+}
+
+/** Waits until the catcher holds a message to `recipient` that `match` accepts, and returns it. */
+export async function caughtMail(
+	recipient: string,
+	match: (mail: CaughtMail) => boolean,
+	timeout = 20_000
+): Promise<CaughtMail> {
+	let found: CaughtMail | undefined;
+	await expect(async () => {
+		const all = (await (await fetch(`${MAIL_CATCHER_URL}/messages`)).json()) as CaughtMail[];
+		found = all.find((m) => m.envelope.to.includes(recipient) && match(m));
+		expect(found, `a message to ${recipient}`).toBeDefined();
+	}).toPass({ timeout, intervals: [250, 500, 1000] });
+	return found!;
+}
+
+/** The first address in a plain-text mail after `label: `. */
+export function linkIn(mail: CaughtMail, label: string): string {
+	const link = new RegExp(`${label}: (\\S+)`).exec(mail.text)?.[1];
+	if (!link) throw new Error(`No "${label}" link in "${mail.subject}"`);
+	return link;
+}

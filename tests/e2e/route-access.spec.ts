@@ -96,6 +96,12 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				form: { name: '' },
 				// admin: 400 (the empty form is rejected field by field); others never reach the action
 				expect: { anonymous: 303, admin: 400, default: 403 }
+			},
+			{
+				method: 'POST',
+				path: '/admin/users?/invite',
+				form: { name: '' },
+				expect: { anonymous: 303, admin: 400, default: 403 }
 			}
 		]
 	},
@@ -119,10 +125,36 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				path: '/admin/users/:user?/revokeToken',
 				form: { tokenId: 'x' },
 				expect: { anonymous: 303, admin: 400, default: 403 }
+			},
+			// admin: a new set-password link is e-mailed (the current password keeps working).
+			{
+				method: 'POST',
+				path: '/admin/users/:user?/reinvite',
+				form: {},
+				expect: { anonymous: 303, admin: 200, default: 403 }
 			}
 		]
 	},
 	'/admin/audit': { page: [{ method: 'GET', path: '/admin/audit', expect: ADMIN_PAGE }] },
+	'/admin/mail': { page: [{ method: 'GET', path: '/admin/mail', expect: ADMIN_PAGE }] },
+	// Public: the token is the proof. An unknown one shows a page saying so; its form is refused.
+	'/set-password/[token]': {
+		page: [
+			{
+				method: 'GET',
+				path: '/set-password/not-a-real-invitation-token-0000',
+				expect: { default: 200 }
+			}
+		],
+		actions: [
+			{
+				method: 'POST',
+				path: '/set-password/not-a-real-invitation-token-0000',
+				form: { password: 'A-long-enough-password', confirm: 'A-long-enough-password' },
+				expect: { default: 400 }
+			}
+		]
+	},
 	'/products': { page: [{ method: 'GET', path: '/products', expect: READ_PRODUCTS }] },
 	'/products/new': {
 		page: [{ method: 'GET', path: '/products/new', expect: EDITOR_PAGE }],
@@ -514,6 +546,15 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			{
 				method: 'GET',
 				path: '/shipments/:ship/deposits/00000000-0000-4000-8000-000000000000/paid',
+				expect: { anonymous: 303, default: 404 }
+			}
+		]
+	},
+	'/shipments/[shipmentId=uuid]/deposits/[depositId=uuid]/receipt': {
+		page: [
+			{
+				method: 'GET',
+				path: '/shipments/:ship/deposits/00000000-0000-4000-8000-000000000000/receipt',
 				expect: { anonymous: 303, default: 404 }
 			}
 		]

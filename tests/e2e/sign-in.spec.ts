@@ -12,7 +12,8 @@ const NAVIGATION: Record<keyof typeof DEMO, string[]> = {
 		'Trace a serial',
 		'Organizations',
 		'People & access',
-		'Audit trail'
+		'Audit trail',
+		'Outgoing mail'
 	],
 	coordinator: [
 		'Overview',

@@ -6,6 +6,7 @@ import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { RequestEvent } from '@sveltejs/kit';
 import Decimal from 'decimal.js';
+import { QueryTypes } from 'sequelize';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { percentOfMinor } from '$lib/deposits/minor-units';
@@ -29,7 +30,7 @@ import { signatureHeader } from '../../scripts/stripe-fake/webhooks';
 import { POST as webhook } from '../../src/routes/api/v1/stripe/webhook/+server';
 import { countRows, sequelize, sessionUserFor } from './db';
 
-const FAKE_PORT = 12111;
+const FAKE_PORT = Number(process.env.STRIPE_FAKE_PORT ?? 12111);
 const config: StripeConfig = {
 	secretKey: 'sk_test_landfall_integration',
 	webhookSecret: 'whsec_landfall_integration',
@@ -152,6 +153,15 @@ const payOnPage = (url: string, card: string) =>
 		headers: { 'content-type': 'application/x-www-form-urlencoded' },
 		body: new URLSearchParams({ card, expiry: '12/30', cvc: '123' })
 	});
+
+/** Who the outbox holds a message of `kind` for, about this deposit. */
+const mails = async (kind: string, depositId: string) =>
+	(
+		await sequelize.query<{ recipient: string }>(
+			`SELECT recipient FROM mail_outbox WHERE kind = :kind AND dedupe_key LIKE :key ORDER BY 1`,
+			{ type: QueryTypes.SELECT, replacements: { kind, key: `${kind}:${depositId}:%` } }
+		)
+	).map((r) => r.recipient);
 
 const events = (depositId: string, type: string) =>
 	countRows('stripe_events', 'deposit_id = :depositId AND type = :type', { depositId, type });
@@ -316,6 +326,17 @@ describe('paying through Checkout and the webhook', () => {
 			[1, 2, 3].map(async () => (await callWebhook(body, signature)).json())
 		);
 		expect(results.every((r) => r.duplicate === true)).toBe(true);
+
+		// One request notice and one receipt per customer user, however often the event came.
+		expect(await mails('deposit_requested', id)).toEqual(['buyer@hallvik.example']);
+		expect(await mails('payment_received', id)).toEqual(['buyer@hallvik.example']);
+		const [receipt] = await sequelize.query<{ text: string }>(
+			`SELECT text FROM mail_outbox WHERE kind = 'payment_received' AND dedupe_key LIKE :key`,
+			{ type: QueryTypes.SELECT, replacements: { key: `payment_received:${id}:%` } }
+		);
+		expect(receipt!.text).toContain('Amount: EUR 1,250.00');
+		expect(receipt!.text).toMatch(/Payment reference: pi_/);
+		expect(receipt!.text).toContain(`/shipments/${hallvik}/deposits/${id}/receipt`);
 	});
 
 	it('applies a first delivery once when three arrive at the same moment', async () => {
@@ -454,6 +475,7 @@ describe('refunds and cancelling', () => {
 		expect(await events(id, 'refund.created')).toBe(1);
 		expect(await events(id, 'charge.refunded')).toBe(1);
 		expect(await refundDeposit(finance, id, d.version, null)).toMatchObject({ status: 409 });
+		expect(await mails('deposit_refunded', id)).toEqual(['buyer@hallvik.example']);
 		expect(
 			await countRows('audit_events', "action = 'deposit.refund' AND entity_id = :id", { id })
 		).toBeLessThanOrEqual(1);

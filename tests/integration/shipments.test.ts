@@ -526,6 +526,13 @@ describe('changeStatus', () => {
 			['booked', 'documents_issued', coordinator.id]
 		]);
 		expect(events[1]!.note).toBe('Space confirmed');
+		// Booking queues one confirmation per customer user of Hallvik, in the same transaction.
+		const confirmations = await sequelize.query<{ recipient: string; text: string }>(
+			`SELECT recipient, text FROM mail_outbox WHERE dedupe_key LIKE :key`,
+			{ type: QueryTypes.SELECT, replacements: { key: `booking_confirmed:${id}:%` } }
+		);
+		expect(confirmations.map((c) => c.recipient)).toEqual(['buyer@hallvik.example']);
+		expect(confirmations[0]!.text).toContain(`/shipments/${id}`);
 		expect(events[2]!.note).toMatch(/^Issued CI-\d{4}-\d{5} rev\. A, PL-\d{4}-\d{5} rev\. A$/);
 		const audit = (await auditEvents(id)).filter((a) => a.action === 'shipment.status');
 		expect(audit.map((a) => [a.before, a.after])).toEqual([

@@ -10,6 +10,10 @@ const name = z
 	.min(1, 'Enter the person’s name.')
 	.max(120, 'Keep the name under 120 characters.');
 const role = z.enum(ROLES, { error: 'Choose one of the roles.' });
+const password = z
+	.string()
+	.min(12, `Password too short: ${PASSWORD_RULE}`)
+	.max(128, `Password too long: ${PASSWORD_RULE}`);
 
 export const createUserSchema = z.object({
 	name,
@@ -21,12 +25,20 @@ export const createUserSchema = z.object({
 		.pipe(z.email({ error: 'Enter an e-mail address such as name@company.example.' })),
 	role,
 	organizationId: z.uuid({ error: 'Choose the organization this person belongs to.' }),
-	password: z
-		.string()
-		.min(12, `Password too short: ${PASSWORD_RULE}`)
-		.max(128, `Password too long: ${PASSWORD_RULE}`)
+	password
 });
 export type CreateUserInput = z.infer<typeof createUserSchema>;
+
+/** Adding a person by e-mail: they choose their own password through the invitation link. */
+export const inviteUserSchema = createUserSchema.omit({ password: true });
+
+/** The invitation's set-password form. */
+export const setPasswordSchema = z
+	.object({ password, confirm: z.string() })
+	.refine((v) => v.password === v.confirm, {
+		path: ['confirm'],
+		message: 'The two passwords differ: type the same one twice.'
+	});
 
 export const updateUserSchema = z.object({
 	name,

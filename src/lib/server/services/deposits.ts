@@ -345,6 +345,7 @@ export async function requestDeposit(
 			organizationId: shipment.customerId,
 			amount: formatMinor(amountMinor, input.currency),
 			dueDate: input.dueDate,
+			note: input.note || null,
 			payLink: `${context.origin}/shipments/${shipmentId}#deposits`
 		});
 		return depositId;

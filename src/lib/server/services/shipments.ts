@@ -17,6 +17,7 @@ import {
 	ShipmentStatusEvent
 } from '../db/models';
 import { recordAudit } from './audit';
+import { shipmentBooked } from './shipment-notices';
 import { papersOutOfDate } from './documents/issue';
 import { canEditShipments, shipmentScopeWhere } from './shipment-scope';
 import { refused as refusal, type Refusal, type ServiceResult } from './result';
@@ -381,6 +382,7 @@ export async function changeStatus(
 			},
 			transaction
 		);
+		if (input.to === 'booked' && shipment.status === 'draft') await shipmentBooked(transaction, id);
 		return { id, status: input.to };
 	});
 }

@@ -1,4 +1,5 @@
-import { OptimisticLockError, UniqueConstraintError } from 'sequelize';
+import { randomBytes } from 'node:crypto';
+import { OptimisticLockError, UniqueConstraintError, type Transaction } from 'sequelize';
 import { ROLE_LABELS, ROLE_ORGANIZATION_KIND, ORGANIZATION_KIND_LABELS } from '../../roles';
 import type { CreateUserInput, UpdateUserInput } from '../../schemas/users';
 import { hashPassword } from '../auth/password';
@@ -68,14 +69,19 @@ async function roleFitsOrganization(role: User['role'], organizationId: string) 
 	return null;
 }
 
+/**
+ * Adds a person. Without a password (an invitation) the account gets a random one nobody knows;
+ * `onCreated` runs in the same transaction (e.g. to queue the invitation e-mail).
+ */
 export async function createUser(
 	actor: SessionUser,
-	input: CreateUserInput,
-	ip: string | null
+	input: Omit<CreateUserInput, 'password'> & { password?: string },
+	ip: string | null,
+	onCreated?: (user: User, transaction: Transaction) => Promise<void>
 ): Promise<ServiceResult<UserRow>> {
 	const mismatch = await roleFitsOrganization(input.role, input.organizationId);
 	if (mismatch) return invalid({ organizationId: mismatch });
-	const passwordHash = await hashPassword(input.password);
+	const passwordHash = await hashPassword(input.password ?? randomBytes(32).toString('base64url'));
 	try {
 		const user = await User.sequelize!.transaction(async (transaction) => {
 			const created = await User.create(
@@ -99,6 +105,7 @@ export async function createUser(
 				},
 				transaction
 			);
+			await onCreated?.(created, transaction);
 			return created;
 		});
 		return { ok: true, value: (await getUser(user.id))! };

@@ -8,7 +8,11 @@ import { signInSchema } from './schema';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
 	if (locals.user) redirect(303, safeRedirectPath(url.searchParams.get('redirectTo')));
-	return { form: await superValidate(zod4(signInSchema)) };
+	return {
+		form: await superValidate(zod4(signInSchema)),
+		// Set by the invitation's set-password page after it saved the password.
+		passwordSet: url.searchParams.get('password-set') === '1'
+	};
 };
 
 const INVALID = 'That e-mail address and password do not match an active Landfall account.';

@@ -23,6 +23,7 @@ import {
 import type { SessionUser } from '../../auth/session-user';
 import { Shipment, ShipmentStatusEvent } from '../../db/models';
 import { recordAudit } from '../audit';
+import { papersIssued } from '../shipment-notices';
 import { refused, type Refusal, type ServiceResult } from '../result';
 import { canEditShipments } from '../shipment-scope';
 import { documentSource, type GatheredSource } from './document-source';
@@ -263,6 +264,7 @@ export async function issuePapers(
 				},
 				t
 			);
+			await papersIssued(t, shipmentId, papers);
 			return { papers, status };
 		});
 		return { ok: true, value };

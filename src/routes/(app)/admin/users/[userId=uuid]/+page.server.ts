@@ -3,6 +3,7 @@ import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guard';
 import { issueToken, listTokens, revokeToken } from '$lib/server/services/api-tokens';
+import { reinviteUser } from '$lib/server/services/invitations';
 import { getUser, updateUser } from '$lib/server/services/users';
 import { updateUserSchema } from '$lib/schemas/users';
 import type { Actions, PageServerLoad } from './$types';
@@ -57,5 +58,14 @@ export const actions: Actions = {
 		const result = await revokeToken(admin, event.params.userId, tokenId, event.getClientAddress());
 		if (!result.ok) return fail(result.status, { tokenError: result.message });
 		return { revoked: result.value.name };
+	},
+	reinvite: async (event) => {
+		const admin = requireRole(event, 'admin');
+		const result = await reinviteUser(admin, event.params.userId, {
+			origin: event.url.origin,
+			ip: event.getClientAddress()
+		});
+		if (!result.ok) return fail(result.status, { inviteError: result.message });
+		return { invited: result.value.email };
 	}
 };
