@@ -18,18 +18,18 @@ export const up: Migration = async ({ context: qi }) => {
 			title text NOT NULL CHECK (char_length(title) BETWEEN 1 AND 200),
 			file_name text NOT NULL CHECK (char_length(file_name) BETWEEN 1 AND 120),
 			content_type text NOT NULL CHECK (content_type IN ('application/pdf', 'image/png', 'image/jpeg')),
-			byte_size integer NOT NULL CHECK (byte_size BETWEEN 1 AND 10485760),
+			size_bytes integer NOT NULL CHECK (size_bytes BETWEEN 1 AND 10485760),
 			sha256 char(64) NOT NULL CHECK (sha256 ~ '^[0-9a-f]{64}$'),
 			content bytea NOT NULL,
 			issued_on date,
 			expires_on date CHECK (expires_on IS NULL OR issued_on IS NULL OR expires_on >= issued_on),
 			reminder_sent_at timestamptz,
 			uploaded_by uuid REFERENCES users (id) ON DELETE SET NULL,
-			uploaded_at timestamptz NOT NULL DEFAULT now(),
+			created_at timestamptz NOT NULL DEFAULT now(),
 			retired_at timestamptz,
 			retired_by uuid REFERENCES users (id) ON DELETE SET NULL,
 			CHECK ((shipment_id IS NULL) <> (product_id IS NULL)),
-			CHECK (length(content) = byte_size)
+			CHECK (length(content) = size_bytes)
 		);
 		CREATE INDEX supporting_documents_shipment_idx ON supporting_documents (shipment_id) WHERE shipment_id IS NOT NULL;
 		CREATE INDEX supporting_documents_product_idx ON supporting_documents (product_id, kind) WHERE product_id IS NOT NULL;
@@ -41,6 +41,7 @@ export const up: Migration = async ({ context: qi }) => {
 			document_id uuid NOT NULL REFERENCES supporting_documents (id) ON DELETE CASCADE,
 			user_id uuid REFERENCES users (id) ON DELETE SET NULL,
 			via text NOT NULL CHECK (via IN ('file', 'api')),
+			ip text,
 			downloaded_at timestamptz NOT NULL DEFAULT now()
 		);
 		CREATE INDEX supporting_document_downloads_idx ON supporting_document_downloads (document_id, downloaded_at);

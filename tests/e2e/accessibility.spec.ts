@@ -166,3 +166,16 @@ test('the pages finance works in: landed cost and its reference data', async ({
 	});
 	await expectAccessible(page, 'landed-cost comparison');
 });
+
+test('the supporting-documents card, listed and with field errors', async ({ page }) => {
+	test.setTimeout(60_000);
+	await signInPage(page, DEMO.coordinator);
+	// SLV-PBL-20 has a seeded UN38.3 summary on file (seeders/demo-supporting-documents.ts).
+	await page.goto('/products');
+	await page.getByRole('link', { name: 'SLV-PBL-20' }).click();
+	const card = page.getByRole('region', { name: 'Supporting documents', exact: true });
+	await expect(card.getByRole('table', { name: 'Supporting documents on file' })).toBeVisible();
+	await card.getByRole('button', { name: 'Add the document' }).click();
+	await expect(card.getByText('Choose what kind of document this is.')).toBeVisible();
+	await expectAccessible(page, 'supporting documents with field errors');
+});

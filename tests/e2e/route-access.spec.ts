@@ -58,7 +58,8 @@ interface Probe {
 	/**
 	 * Path with placeholders :own (the user's organization), :other (another customer), :user,
 	 * :ship (Hallvik's shipment, broker Kaaiman assigned) and :otherShip (Wattlebird's); :cedar
-	 * (Cedarpoint's, papers issued, no broker) and :cedarDoc (its first paper); :place,
+	 * (Cedarpoint's, papers issued, no broker), :cedarDoc (its first paper) and :cedarSupport (its
+	 * seeded certificate of origin); :place,
 	 * :party, :pallet, :container, :tariff, :rateCard, :countryRule, :fee and :deMinimis (the
 	 * first listed).
 	 */
@@ -187,6 +188,12 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 				method: 'GET',
 				path: '/shipments/:ship/supporting/00000000-0000-4000-8000-000000000000',
 				expect: { anonymous: 303, default: 404 }
+			},
+			// Cedarpoint's document: staff download it; Hallvik's buyer and Kaaiman get a 404.
+			{
+				method: 'GET',
+				path: '/shipments/:cedar/supporting/:cedarSupport',
+				expect: OTHER_SHIPMENT_PAGE
 			}
 		]
 	},
@@ -735,6 +742,20 @@ const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: Probe[] 
 			}
 		]
 	},
+	'/api/v1/shipments/[shipmentId=uuid]/supporting-documents/[documentId=uuid]': {
+		api: [
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:ship/supporting-documents/00000000-0000-4000-8000-000000000000',
+				expect: { anonymous: 401, default: 404 }
+			},
+			{
+				method: 'GET',
+				path: '/api/v1/shipments/:cedar/supporting-documents/:cedarSupport',
+				expect: OTHER_SHIPMENT_API
+			}
+		]
+	},
 	'/api/v1/shipments/[shipmentId=uuid]/deposits': {
 		api: [
 			{
@@ -829,7 +850,8 @@ test.describe('access per role', () => {
 		ship: '',
 		otherShip: '',
 		cedar: '',
-		cedarDoc: ''
+		cedarDoc: '',
+		cedarSupport: ''
 	};
 
 	test.beforeAll(async ({ baseURL }) => {
@@ -871,6 +893,11 @@ test.describe('access per role', () => {
 			await admin.get(`/api/v1/shipments/${ids.cedar}/documents`)
 		).json()) as { papers: { id: string }[] };
 		ids.cedarDoc = register.papers[0]!.id;
+		// Its seeded certificate of origin (seeders/demo-supporting-documents.ts).
+		const supporting = (await (
+			await admin.get(`/api/v1/shipments/${ids.cedar}/supporting-documents`)
+		).json()) as { documents: { id: string }[] };
+		ids.cedarSupport = supporting.documents[0]!.id;
 		const productsPage = await admin.get('/products');
 		ids.product = /\/products\/([0-9a-f-]{36})/.exec(await productsPage.text())![1]!;
 		const firstId = async (page: string, link: string) =>
@@ -906,6 +933,7 @@ test.describe('access per role', () => {
 			for (const probe of probes) {
 				const url = probe.path
 					.replace(':otherShip', ids.otherShip)
+					.replace(':cedarSupport', ids.cedarSupport)
 					.replace(':cedarDoc', ids.cedarDoc)
 					.replace(':cedar', ids.cedar)
 					.replace(':ship', ids.ship)

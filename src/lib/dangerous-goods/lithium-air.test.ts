@@ -113,6 +113,15 @@ describe('state of charge', () => {
 		expect(formatSource(src!)).toMatch(/IATA.*PI 966/);
 	});
 
+	// From 2026 the PI 966 requirement applies over 2.7 Wh only (Lion Technology Inc., "Lithium
+	// Battery 30% State of Charge Recommendations for 2025", 2024, summarising IATA DGR 66th ed.:
+	// secondary source). Unknown ratings count as over.
+	it('stays a recommendation for packed-with batteries of 2.7 Wh or less', () => {
+		const small = { batteryConfig: 'packed_with' as const, cellWh: '2.7', batteryWh: '2.7' };
+		expect(air(small).stateOfCharge).toBe('recommended');
+		expect(air({ ...small, cellWh: '2.71', batteryWh: '2.71' }).stateOfCharge).toBe('required');
+	});
+
 	it('is recommended for contained-in, and does not apply to lithium metal', () => {
 		expect(air({ batteryConfig: 'contained' }).stateOfCharge).toBe('recommended');
 		expect(

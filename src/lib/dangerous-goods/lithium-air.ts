@@ -6,6 +6,7 @@
  *
  * Pure module: no framework imports.
  */
+import Decimal from 'decimal.js';
 import type { LithiumClassification } from './lithium-battery';
 import { LITHIUM_LIMITS } from './lithium-battery';
 import type { LithiumRequirement } from './requirements';
@@ -52,8 +53,17 @@ function stateOfCharge(c: LithiumClassification, onDate: string): StateOfChargeR
 	if (c.chemistry !== 'lithium_ion') return 'none';
 	if (c.config === 'standalone') return 'required';
 	if (onDate < PI966_SOC_FROM) return 'recommended';
-	return c.config === 'packed_with' ? 'required' : 'recommended';
+	if (c.config !== 'packed_with') return 'recommended';
+	// From 2026 the 30 % binds PI 966 cells and batteries over 2.7 Wh; at or below, it stays a
+	// recommendation (IATA DGR 66th ed. as summarised by Lion Technology Inc., "Lithium Battery
+	// 30% State of Charge Recommendations for 2025", 21 Oct 2024: secondary source). Unknown
+	// ratings are treated as over.
+	const wh = c.ratings.batteryWh ?? c.ratings.cellWh;
+	return wh !== null && new Decimal(wh).lte(PI966_SOC_ABOVE_WH) ? 'recommended' : 'required';
 }
+
+/** PI 966 batteries above this many watt-hours must be at 30 % state of charge from 2026. */
+export const PI966_SOC_ABOVE_WH = '2.7';
 
 /**
  * @param courier true for express courier: the same air rules, and the carrier's own acceptance

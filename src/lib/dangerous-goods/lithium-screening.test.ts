@@ -144,7 +144,13 @@ describe('summariseLithiumShipment', () => {
 	});
 
 	it('keeps actions apart when their rules differ', () => {
-		const packed = { ...headset, sku: 'HS-KIT', batteryConfig: 'packed_with' as const };
+		const packed = {
+			...headset,
+			sku: 'HS-KIT',
+			batteryConfig: 'packed_with' as const,
+			cellWh: '10',
+			batteryWh: '10'
+		};
 		const s = summariseLithiumShipment([{ product: powerBank }, { product: packed }], 'air', ON);
 		const soc = s.actions.filter((a) => a.id === 'air_soc_required');
 		expect(soc.map((a) => [a.skus, a.source.basis])).toEqual([

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { MAX_UPLOAD_BYTES } from '../uploads/file-check';
+import { MAX_UPLOAD_BYTES, tooLargeMessage } from '../uploads/file-check';
 import { SUPPORTING_KINDS } from '../uploads/document-kinds';
 
 // The upload form of a supporting document. The file's size is checked here for a quick field
@@ -21,7 +21,7 @@ export const supportingUploadSchema = z
 		file: z
 			.instanceof(File, { message: 'Choose a PDF, PNG or JPEG file.' })
 			.refine((f) => f.size > 0, 'Choose a PDF, PNG or JPEG file; this one is empty.')
-			.refine((f) => f.size <= MAX_UPLOAD_BYTES, 'The file is over 10 MB.')
+			.refine((f) => f.size <= MAX_UPLOAD_BYTES, tooLargeMessage(MAX_UPLOAD_BYTES + 1))
 	})
 	.superRefine((v, ctx) => {
 		if (v.issuedOn && v.expiresOn && v.expiresOn < v.issuedOn)

@@ -164,6 +164,30 @@ export function openApiDocument(origin: string) {
 					responses: { 200: ok('{ deposits: [...] }'), ...errors }
 				}
 			},
+			'/shipments/{shipmentId}/supporting-documents': {
+				parameters: [idParam('shipmentId')],
+				get: {
+					summary: 'Supporting documents kept with the shipment (no file content)',
+					description:
+						'Certificates of origin, UN38.3 test summaries, safety data sheets, supplier declarations… filed on the shipment: `kind`, `kindLabel`, `title`, `fileName` (sanitised), `contentType` (PDF, PNG or JPEG, recognised by content), `sizeBytes`, `sha256`, `issuedOn`, `expiresOn`, `current` (not retired and not past its expiry), who uploaded it and when, `retiredAt` and the download count. Whoever sees the shipment sees its list; another organization gets a 404. Documents kept on products are not listed here.',
+					responses: { 200: ok('{ documents: [...] }'), ...errors }
+				}
+			},
+			'/shipments/{shipmentId}/supporting-documents/{documentId}': {
+				parameters: [idParam('shipmentId'), idParam('documentId')],
+				get: {
+					summary: 'Download one supporting document of the shipment',
+					description:
+						'`Content-Disposition: attachment` with the sanitised name, `X-Content-Type-Options: nosniff` and `x-landfall-sha256`. Every download is logged with the user, time and client address. A document not visible to the caller is a 404.',
+					responses: {
+						200: {
+							description: 'The file',
+							content: { 'application/pdf': {}, 'image/png': {}, 'image/jpeg': {} }
+						},
+						...errors
+					}
+				}
+			},
 			'/stripe/webhook': {
 				post: {
 					summary: 'Stripe webhook endpoint (no session: the Stripe-Signature header is checked)',

@@ -7,8 +7,10 @@
  * - a product's documents: staff, and a broker for products on a shipment assigned to its firm
  *   (it may have to show a UN38.3 summary or an origin proof to customs). Customers do not:
  *   supplier declarations name the manufacturer's suppliers.
- * Coordinators and administrators upload and retire. Anything not visible is a 404, so an id
- * never confirms that a document exists.
+ * Coordinators and administrators upload and retire (finance and brokers do not: a broker sends a
+ * certificate of origin to the coordinator, who files it, so the exporter answers for what is on
+ * file). Anything not visible is a 404, so an id never confirms that a document exists.
+ * Expiry reminders are in supporting-document-expiry.ts.
  */
 import { createHash } from 'node:crypto';
 import { QueryTypes } from 'sequelize';
@@ -33,7 +35,7 @@ export interface SupportingDocumentRow {
 	title: string;
 	fileName: string;
 	contentType: string;
-	byteSize: number;
+	sizeBytes: number;
 	sha256: string;
 	issuedOn: string | null;
 	expiresOn: string | null;
@@ -72,10 +74,10 @@ function visibleSql(user: SessionUser): { sql: string; replacements: Record<stri
 
 const SELECT = `
 	SELECT d.id, d.kind, d.title, d.file_name AS "fileName", d.content_type AS "contentType",
-	       d.byte_size AS "byteSize", d.sha256, d.issued_on::text AS "issuedOn",
+	       d.size_bytes AS "sizeBytes", d.sha256, d.issued_on::text AS "issuedOn",
 	       d.expires_on::text AS "expiresOn",
 	       (d.retired_at IS NULL AND (d.expires_on IS NULL OR d.expires_on >= current_date)) AS current,
-	       u.name AS "uploadedBy", d.uploaded_at AS "uploadedAt", d.retired_at AS "retiredAt",
+	       u.name AS "uploadedBy", d.created_at AS "uploadedAt", d.retired_at AS "retiredAt",
 	       (SELECT count(*)::int FROM supporting_document_downloads x WHERE x.document_id = d.id) AS downloads
 	FROM supporting_documents d LEFT JOIN users u ON u.id = d.uploaded_by`;
 
@@ -112,7 +114,7 @@ export async function listSupportingDocuments(
 	const o = ownerSql(owner);
 	const rows = await db().query<RawRow>(
 		`${SELECT} WHERE ${o.sql} AND ${scope.sql}
-		 ORDER BY (d.retired_at IS NULL) DESC, d.kind, d.uploaded_at DESC`,
+		 ORDER BY (d.retired_at IS NULL) DESC, d.kind, d.created_at DESC`,
 		{ replacements: { ...scope.replacements, ownerId: o.ownerId }, type: QueryTypes.SELECT }
 	);
 	return rows.map(toRow);
@@ -148,8 +150,9 @@ export async function uploadSupportingDocument(
 ): Promise<ServiceResult<{ id: string; fileName: string; sha256: string }>> {
 	if (!canEditShipments(user))
 		return refused(403, 'Only coordinators and administrators add supporting documents.');
-	const check = checkUpload(input.fileName, input.bytes);
-	if (!check.ok) return invalid({ file: check.message }, check.message);
+	const check = checkUpload({ name: input.fileName, bytes: input.bytes });
+	if (!check.ok)
+		return invalid({ file: check.message }, 'The file was not added: see the file field.');
 	if (input.issuedOn && input.expiresOn && input.expiresOn < input.issuedOn)
 		return invalid({ expiresOn: 'The expiry date is before the date of issue.' });
 	if (!(await ownerVisible(user, owner)))
@@ -158,7 +161,7 @@ export async function uploadSupportingDocument(
 	const id = await db().transaction(async (transaction) => {
 		const [row] = await db().query<{ id: string }>(
 			`INSERT INTO supporting_documents (shipment_id, product_id, kind, title, file_name, content_type,
-			        byte_size, sha256, content, issued_on, expires_on, uploaded_by)
+			        size_bytes, sha256, content, issued_on, expires_on, uploaded_by)
 			 VALUES (:shipmentId, :productId, :kind, :title, :fileName, :type, :size, :sha256, :content,
 			        :issuedOn, :expiresOn, :userId)
 			 RETURNING id`,
@@ -209,7 +212,8 @@ export async function downloadSupportingDocument(
 	user: SessionUser,
 	owner: DocumentOwner,
 	documentId: string,
-	via: 'file' | 'api'
+	via: 'file' | 'api',
+	ip: string | null = null
 ): Promise<SupportingFile | null> {
 	const scope = visibleSql(user);
 	const o = ownerSql(owner);
@@ -225,8 +229,9 @@ export async function downloadSupportingDocument(
 		);
 		if (!row) return null;
 		await db().query(
-			`INSERT INTO supporting_document_downloads (document_id, user_id, via) VALUES (:documentId, :userId, :via)`,
-			{ replacements: { documentId, userId: user.id, via }, transaction }
+			`INSERT INTO supporting_document_downloads (document_id, user_id, via, ip)
+			 VALUES (:documentId, :userId, :via, :ip)`,
+			{ replacements: { documentId, userId: user.id, via, ip }, transaction }
 		);
 		return row;
 	});
@@ -267,34 +272,45 @@ export async function retireSupportingDocument(
 	});
 }
 
+/** A document that counts on a date: not retired, and no expiry or one on or after the date. */
+export interface CurrentDocument {
+	id: string;
+	/** Exactly one of the two is set, as in the table. */
+	productId: string | null;
+	shipmentId: string | null;
+	title: string;
+	issuedOn: string | null;
+	expiresOn: string | null;
+}
+
 /**
- * For the readiness check: which of `productIds` have a current document of `kind` on file on
- * `onDate` (YYYY-MM-DD), on the product itself or on `shipmentId`; and whether the shipment has
- * one. Not scoped: it serves staff who issue papers.
+ * For the readiness checklist: the current documents of `kind` on `onDate` (YYYY-MM-DD) that are
+ * filed on any of `productIds`, or on `options.shipmentId` when given (a shipment-level UN38.3
+ * summary or proof of origin counts too). Latest expiry first. Not scoped to a user: it answers
+ * "is it on file", for staff who issue papers; never return the rows to a customer as they are.
  */
 export async function currentDocumentsOfKind(
+	productIds: readonly string[],
 	kind: SupportingKind,
-	shipmentId: string,
-	productIds: string[],
-	onDate: string
-): Promise<{ onShipment: boolean; products: Set<string> }> {
-	const rows = await db().query<{ productId: string | null; shipmentId: string | null }>(
-		`SELECT product_id AS "productId", shipment_id AS "shipmentId" FROM supporting_documents
-		 WHERE kind = :kind AND retired_at IS NULL AND (expires_on IS NULL OR expires_on >= :onDate)
-		   AND (shipment_id = :shipmentId OR product_id IN (:productIds))`,
+	onDate: string,
+	options: { shipmentId?: string } = {}
+): Promise<CurrentDocument[]> {
+	if (productIds.length === 0 && !options.shipmentId) return [];
+	return db().query<CurrentDocument>(
+		`SELECT id, product_id AS "productId", shipment_id AS "shipmentId", title,
+		        issued_on::text AS "issuedOn", expires_on::text AS "expiresOn"
+		   FROM supporting_documents
+		  WHERE kind = :kind AND retired_at IS NULL AND (expires_on IS NULL OR expires_on >= :onDate)
+		    AND (product_id = ANY(CAST(:productIds AS uuid[])) OR shipment_id = :shipmentId)
+		  ORDER BY expires_on DESC NULLS FIRST, created_at DESC`,
 		{
 			replacements: {
 				kind,
 				onDate,
-				shipmentId,
-				// IN () is invalid SQL; a nil uuid matches nothing.
-				productIds: productIds.length ? productIds : ['00000000-0000-0000-0000-000000000000']
+				productIds: `{${productIds.join(',')}}`,
+				shipmentId: options.shipmentId ?? null
 			},
 			type: QueryTypes.SELECT
 		}
 	);
-	return {
-		onShipment: rows.some((r) => r.shipmentId === shipmentId),
-		products: new Set(rows.flatMap((r) => (r.productId ? [r.productId] : [])))
-	};
 }

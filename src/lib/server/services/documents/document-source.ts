@@ -111,10 +111,13 @@ export async function documentSource(
 	]);
 	const today = new Date().toISOString().slice(0, 10);
 	const productIds = [...products.values()].map((p) => p.id);
+	// A UN38.3 summary counts on the product or on this shipment; a proof of origin on the shipment.
 	const [un383, origin] = await Promise.all([
-		currentDocumentsOfKind('un38_3_summary', shipmentId, productIds, today),
-		currentDocumentsOfKind('proof_of_origin', shipmentId, [], today)
+		currentDocumentsOfKind(productIds, 'un38_3_summary', today, { shipmentId }),
+		currentDocumentsOfKind([], 'proof_of_origin', today, { shipmentId })
 	]);
+	const un383OnShipment = un383.some((d) => d.shipmentId === shipmentId);
+	const un383Products = new Set(un383.map((d) => d.productId));
 	const source: DocumentSource = {
 		reference: row.reference,
 		status: row.status,
@@ -174,7 +177,7 @@ export async function documentSource(
 				unitPrice: l.unitPrice,
 				battery: p?.batteryConfig ?? 'none',
 				batteryChemistry: p?.batteryChemistry ?? null,
-				un383OnFile: un383.onShipment || (p !== undefined && un383.products.has(p.id))
+				un383OnFile: un383OnShipment || (p !== undefined && un383Products.has(p.id))
 			};
 		}),
 		measure: result,
@@ -188,7 +191,7 @@ export async function documentSource(
 			serialTo: l.serialTo
 		})),
 		loadPlan: loadPlanFigures(plan),
-		proofOfOriginOnFile: origin.onShipment
+		proofOfOriginOnFile: origin.length > 0
 	};
 	return { source, shipmentId, exporterId: row.exporterId, version: row.version, loadPlan: plan };
 }

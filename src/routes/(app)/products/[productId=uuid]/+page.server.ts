@@ -12,6 +12,7 @@ import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { productFormValues } from '$lib/server/services/product-form';
 import { getProduct, saveProduct } from '$lib/server/services/products';
 import { productSchema } from '$lib/schemas/products';
+import { productLithiumView } from '$lib/lithium-view';
 import { formatHsCode, hsParts } from '$lib/trade/hs-code';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -27,6 +28,7 @@ export const load: PageServerLoad = async (event) => {
 		canEdit: user.role === 'admin' || user.role === 'coordinator',
 		form: await superValidate(productFormValues(product), zod4(productSchema), { errors: false }),
 		supporting: await supportingDocumentsData(event, { productId: product.id }),
+		lithium: productLithiumView(product),
 		...countryAndCurrencyOptions()
 	};
 };

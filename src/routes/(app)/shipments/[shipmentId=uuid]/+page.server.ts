@@ -46,6 +46,12 @@ import {
 } from '$lib/schemas/shipments';
 import { DOCUMENT_KINDS } from '$lib/documents/types';
 import { isStaff } from '$lib/roles';
+import { shipmentLithiumView } from '$lib/lithium-view';
+import { productsBySku } from '$lib/server/services/products';
+import { INCOTERM_OBLIGATIONS_SOURCE, incotermObligations } from '$lib/trade/incoterm-obligations';
+import { incotermChecks } from '$lib/trade/incoterm-checks';
+import { isIncoterm } from '$lib/trade/incoterms';
+import { responsibilityMatrix } from '$lib/trade/responsibility-matrix';
 import { allowedTransitions } from '$lib/trade/shipment-status';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -119,7 +125,8 @@ export const load: PageServerLoad = async (event) => {
 		issueForm,
 		deposits,
 		depositForm,
-		supporting
+		supporting,
+		lineProducts
 	] = await Promise.all([
 		superValidate(header, zod4(shipmentSchema), { errors: false, id: 'header' }),
 		superValidate({ lines, version: shipment.version }, zod4(shipmentLinesSchema), {
@@ -153,8 +160,28 @@ export const load: PageServerLoad = async (event) => {
 			zod4(depositRequestSchema),
 			{ errors: false, id: 'deposit' }
 		),
-		supportingDocumentsData(event, { shipmentId: shipment.id })
+		supportingDocumentsData(event, { shipmentId: shipment.id }),
+		isStaff(user.role) ? productsBySku(shipment.lines.map((l) => l.sku)) : null
 	]);
+	// Lithium guidance for the chosen mode (or the first considered), for staff only.
+	const guidanceMode = shipment.chosenMode ?? shipment.modesConsidered[0] ?? null;
+	const lithium =
+		lineProducts && guidanceMode
+			? shipmentLithiumView([...lineProducts.values()], guidanceMode)
+			: null;
+	const incoterm = isIncoterm(shipment.incoterm)
+		? {
+				term: `${shipment.incoterm} ${shipment.incotermPlace}`.trim(),
+				obligations: incotermObligations(shipment.incoterm),
+				matrix: responsibilityMatrix(shipment.incoterm),
+				checks: incotermChecks({
+					code: shipment.incoterm,
+					namedPlace: shipment.incotermPlace,
+					mode: shipment.chosenMode
+				}).filter((c) => c.severity !== 'error'),
+				source: `${INCOTERM_OBLIGATIONS_SOURCE.issuer}, ${INCOTERM_OBLIGATIONS_SOURCE.document}, ${INCOTERM_OBLIGATIONS_SOURCE.section} (${INCOTERM_OBLIGATIONS_SOURCE.basis})`
+			}
+		: null;
 	// Offer the papers not yet issued; a reissue is chosen on purpose.
 	issueForm.data.kinds = DOCUMENT_KINDS.filter(
 		(k) => !papers?.papers.some((p) => p.kind === k && p.current)
@@ -192,7 +219,9 @@ export const load: PageServerLoad = async (event) => {
 		isCustomer: user.role === 'customer',
 		canRequestDeposit: (DEPOSIT_REQUESTERS as readonly string[]).includes(user.role),
 		currencies: countryAndCurrencyOptions().currencies,
-		supporting
+		supporting,
+		lithium: lithium && { ...lithium, mode: guidanceMode!, chosen: shipment.chosenMode !== null },
+		incoterm
 	};
 };
 
