@@ -381,6 +381,17 @@ describe('expiry reminders', () => {
 			path: `/products/${product.powerBank}#supporting-documents-heading`
 		});
 
+		// Each reminder is queued as e-mail once, to the uploader (a coordinator) among others.
+		const reminders = await sequelize.query<{ recipient: string; subject: string }>(
+			`SELECT recipient, subject FROM mail_outbox WHERE dedupe_key LIKE :key`,
+			{ type: QueryTypes.SELECT, replacements: { key: `document_reminder:${soon}:2031-03-10:%` } }
+		);
+		expect(reminders.map((r) => r.recipient)).toContain(coordinator.email);
+		expect(new Set(reminders.map((r) => r.recipient)).size).toBe(reminders.length);
+		expect(reminders[0]!.subject).toBe(
+			'Safety data sheet for product SLV-PWR-20K lapses in 9 days'
+		);
+
 		// Picked once: a later run finds nothing new, until `later` comes into the window.
 		expect(mine(await sendExpiryReminders(NOW))).toEqual([]);
 		expect(mine(await findExpiringDocuments(30, NOW))).toEqual([]);

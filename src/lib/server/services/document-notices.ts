@@ -1,10 +1,14 @@
 /**
- * Where supporting-document e-mails will be sent from. Called inside the transaction that marks
- * the reminder sent, so a notice is queued exactly when that mark commits (and never twice). It
- * does nothing yet: the e-mail outbox (issue 7, part 2) will write its row here with the same
- * transaction.
+ * Supporting-document e-mails. Called inside the transaction that marks the reminder sent, so a
+ * notice is queued through the outbox exactly when that mark commits (and never twice: the
+ * dedupe key names the document, its last day and the recipient). It goes to the uploader and
+ * to every enabled coordinator, who keep the documents current.
  */
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { User } from '../db/models';
+import { enqueueForEach, type Recipient } from '../mail/outbox';
+import { mailOrigin } from '../mail/origin';
+import { documentReminderMail } from '../mail/templates/messages';
 
 export interface DocumentExpiringNotice {
 	documentId: string;
@@ -27,6 +31,35 @@ export interface DocumentExpiringNotice {
 
 /** A supporting document lapses soon: tell the people who keep it current. */
 export async function documentExpiring(
-	_transaction: Transaction,
-	_notice: DocumentExpiringNotice
-): Promise<void> {}
+	transaction: Transaction,
+	notice: DocumentExpiringNotice
+): Promise<void> {
+	const recipients = await User.sequelize!.query<Recipient>(
+		`SELECT id, name, email FROM users
+		  WHERE NOT disabled AND (role = 'coordinator' OR id = :uploader)
+		  ORDER BY email`,
+		{ type: QueryTypes.SELECT, transaction, replacements: { uploader: notice.uploadedByUserId } }
+	);
+	const origin = mailOrigin();
+	const owner =
+		'shipmentReference' in notice.owner
+			? `shipment ${notice.owner.shipmentReference}`
+			: `product ${notice.owner.productSku}`;
+	await enqueueForEach(
+		transaction,
+		recipients,
+		'document_reminder',
+		`${notice.documentId}:${notice.expiresOn}`,
+		(r) =>
+			documentReminderMail({
+				origin,
+				name: r.name,
+				kindLabel: notice.kindLabel,
+				title: notice.title,
+				expiresOn: notice.expiresOn,
+				daysLeft: notice.daysLeft,
+				owner,
+				link: origin + notice.path
+			})
+	);
+}

@@ -148,3 +148,38 @@ export function depositRefundedMail(
 		action: { label: 'Open the shipment', href: m.link }
 	});
 }
+
+export function documentReminderMail(
+	m: Base & {
+		kindLabel: string;
+		title: string;
+		expiresOn: string;
+		daysLeft: number;
+		owner: string;
+		link: string;
+	}
+): MailContent {
+	const when =
+		m.daysLeft <= 0
+			? 'at the end of today'
+			: m.daysLeft === 1
+				? 'tomorrow'
+				: `in ${m.daysLeft} days`;
+	return composeMail({
+		origin: m.origin,
+		subject: `${m.kindLabel} for ${m.owner} lapses ${when}`,
+		heading: 'A supporting document lapses soon',
+		greeting: `Hello ${m.name},`,
+		paragraphs: [
+			`The ${m.kindLabel} “${m.title}” filed on ${m.owner} counts until ${m.expiresOn}. Upload a current one before then, or papers that need it cannot be issued.`
+		],
+		facts: [
+			['Document', `${m.kindLabel}: ${m.title}`],
+			['Filed on', m.owner],
+			['Last valid day', m.expiresOn]
+		],
+		action: { label: 'Open the documents', href: m.link },
+		caution:
+			'Landfall only counts the dates. Whether a test summary or proof of origin is acceptable is for the issuer, the carrier and the customs authorities to decide.'
+	});
+}
