@@ -151,7 +151,8 @@ test.describe('booking one shipment from draft to booked', () => {
 		await header.getByLabel('Chosen mode').selectOption({ label: 'Sea, full container' });
 		await header.getByRole('button', { name: 'Save shipment' }).click();
 		await expect(header.getByRole('status')).toHaveText('Shipment saved.');
-		await expect(page.getByText(/· Sea, full container$/)).toBeVisible();
+		// The header line (the lithium card repeats the mode in its heading).
+		await expect(page.locator('p').filter({ hasText: /· Sea, full container$/ })).toBeVisible();
 
 		await status.getByRole('button', { name: 'Mark booked' }).click();
 		await expect(status.getByText('Booked', { exact: true }).first()).toBeVisible();
