@@ -391,6 +391,13 @@ describe('expiry reminders', () => {
 		);
 		expect(mark?.reminder_sent_at.toISOString()).toBe(NOW.toISOString());
 		expect(mine(await findExpiringDocuments(3000, NOW))).not.toContain(past);
+		// Each reminder is one queued e-mail per keeper, the uploader among them.
+		const mail = await sequelize.query<{ recipient: string; subject: string }>(
+			`SELECT recipient, subject FROM mail_outbox WHERE dedupe_key LIKE :key`,
+			{ replacements: { key: `document_reminder:${soon}:%` }, type: QueryTypes.SELECT }
+		);
+		expect(mail.map((m) => m.recipient)).toContain(coordinator.email);
+		expect(mail[0]!.subject).toBe('Safety data sheet lapses in 9 days: Lapses in 9 days');
 	});
 
 	it('refuses a window that is not a whole number of days', async () => {

@@ -148,3 +148,33 @@ export function depositRefundedMail(
 		action: { label: 'Open the shipment', href: m.link }
 	});
 }
+
+export function documentExpiringMail(
+	m: Base & {
+		kindLabel: string;
+		title: string;
+		expiresOn: string;
+		daysLeft: number;
+		filedOn: string;
+		link: string;
+	}
+): MailContent {
+	const when =
+		m.daysLeft === 0 ? 'at the end of today' : `in ${m.daysLeft} day${m.daysLeft === 1 ? '' : 's'}`;
+	return composeMail({
+		origin: m.origin,
+		subject: `${m.kindLabel} lapses ${when}: ${m.title}`,
+		heading: 'A supporting document is about to lapse',
+		greeting: `Hello ${m.name},`,
+		paragraphs: [
+			'The document below stops counting for the checks before papers are issued once it lapses. Ask the supplier or laboratory for a current one and add it in Landfall.'
+		],
+		facts: [
+			['Document', m.title],
+			['Kind', m.kindLabel],
+			['Filed on', m.filedOn],
+			['Valid until', m.expiresOn]
+		],
+		action: { label: 'Open the documents', href: m.link }
+	});
+}
