@@ -5,6 +5,7 @@
  */
 import { env } from '$env/dynamic/private';
 import { DEFAULT_BACKOFF } from '../../mail/backoff';
+import { sendExpiryReminders } from '../services/supporting-document-expiry';
 import { startPolling } from './dispatcher';
 import { createTransport, smtpConfigFrom } from './transport';
 
@@ -18,8 +19,21 @@ export function startMailDispatcher(): void {
 		policy: { ...DEFAULT_BACKOFF, baseMs: base > 0 ? base : DEFAULT_BACKOFF.baseMs },
 		log: (line) => console.error(line)
 	});
+	// Supporting documents about to lapse: looked for hourly (EXPIRY_CHECK_MS) and once soon after
+	// start. Safe with several processes: each reminder is claimed with SKIP LOCKED and sent once.
+	const every = Number(env.EXPIRY_CHECK_MS || 3_600_000);
+	const remind = () =>
+		void sendExpiryReminders(new Date()).catch((e) =>
+			console.error(`[mail] expiry reminders failed: ${(e as Error).message}`)
+		);
+	const first = setTimeout(remind, 10_000);
+	const hourly = setInterval(remind, every > 0 ? every : 3_600_000);
+	first.unref();
+	hourly.unref();
 	running = {
 		async stop() {
+			clearTimeout(first);
+			clearInterval(hourly);
 			await poller.stop();
 			transport.close();
 		}

@@ -1,14 +1,12 @@
 /**
  * Supporting-document e-mails. Called inside the transaction that marks the reminder sent, so a
- * notice is queued through the outbox exactly when that mark commits (and never twice: the
- * dedupe key names the document, its last day and the recipient). It goes to the uploader and
- * to every enabled coordinator, who keep the documents current.
+ * notice is queued in the outbox exactly when that mark commits (and never twice).
  */
 import { QueryTypes, type Transaction } from 'sequelize';
-import { User } from '../db/models';
 import { enqueueForEach, type Recipient } from '../mail/outbox';
 import { mailOrigin } from '../mail/origin';
-import { documentReminderMail } from '../mail/templates/messages';
+import { documentExpiringMail } from '../mail/templates/messages';
+import { User } from '../db/models';
 
 export interface DocumentExpiringNotice {
 	documentId: string;
@@ -29,37 +27,47 @@ export interface DocumentExpiringNotice {
 	path: string;
 }
 
+/**
+ * Who keeps documents current: the enabled coordinators of the uploader's organization (the
+ * exporter), and the uploader if still enabled; every enabled coordinator when the uploader is gone.
+ */
+async function keepers(transaction: Transaction, uploader: string | null): Promise<Recipient[]> {
+	return User.sequelize!.query<Recipient>(
+		`SELECT id, name, email FROM users u
+		  WHERE NOT u.disabled
+		    AND (u.id = :uploader OR (u.role = 'coordinator' AND (
+		         :uploader::uuid IS NULL
+		         OR u.organization_id = (SELECT organization_id FROM users WHERE id = :uploader))))
+		  ORDER BY email`,
+		{ type: QueryTypes.SELECT, transaction, replacements: { uploader } }
+	);
+}
+
 /** A supporting document lapses soon: tell the people who keep it current. */
 export async function documentExpiring(
 	transaction: Transaction,
 	notice: DocumentExpiringNotice
 ): Promise<void> {
-	const recipients = await User.sequelize!.query<Recipient>(
-		`SELECT id, name, email FROM users
-		  WHERE NOT disabled AND (role = 'coordinator' OR id = :uploader)
-		  ORDER BY email`,
-		{ type: QueryTypes.SELECT, transaction, replacements: { uploader: notice.uploadedByUserId } }
-	);
 	const origin = mailOrigin();
-	const owner =
+	const filedOn =
 		'shipmentReference' in notice.owner
 			? `shipment ${notice.owner.shipmentReference}`
 			: `product ${notice.owner.productSku}`;
 	await enqueueForEach(
 		transaction,
-		recipients,
+		await keepers(transaction, notice.uploadedByUserId),
 		'document_reminder',
-		`${notice.documentId}:${notice.expiresOn}`,
+		notice.documentId,
 		(r) =>
-			documentReminderMail({
+			documentExpiringMail({
 				origin,
 				name: r.name,
 				kindLabel: notice.kindLabel,
 				title: notice.title,
 				expiresOn: notice.expiresOn,
 				daysLeft: notice.daysLeft,
-				owner,
-				link: origin + notice.path
+				filedOn,
+				link: new URL(notice.path, origin).toString()
 			})
 	);
 }

@@ -149,37 +149,32 @@ export function depositRefundedMail(
 	});
 }
 
-export function documentReminderMail(
+export function documentExpiringMail(
 	m: Base & {
 		kindLabel: string;
 		title: string;
 		expiresOn: string;
 		daysLeft: number;
-		owner: string;
+		filedOn: string;
 		link: string;
 	}
 ): MailContent {
 	const when =
-		m.daysLeft <= 0
-			? 'at the end of today'
-			: m.daysLeft === 1
-				? 'tomorrow'
-				: `in ${m.daysLeft} days`;
+		m.daysLeft === 0 ? 'at the end of today' : `in ${m.daysLeft} day${m.daysLeft === 1 ? '' : 's'}`;
 	return composeMail({
 		origin: m.origin,
-		subject: `${m.kindLabel} for ${m.owner} lapses ${when}`,
-		heading: 'A supporting document lapses soon',
+		subject: `${m.kindLabel} lapses ${when}: ${m.title}`,
+		heading: 'A supporting document is about to lapse',
 		greeting: `Hello ${m.name},`,
 		paragraphs: [
-			`The ${m.kindLabel} “${m.title}” filed on ${m.owner} counts until ${m.expiresOn}. Upload a current one before then, or papers that need it cannot be issued.`
+			'The document below stops counting for the checks before papers are issued once it lapses. Ask the supplier or laboratory for a current one and add it in Landfall.'
 		],
 		facts: [
-			['Document', `${m.kindLabel}: ${m.title}`],
-			['Filed on', m.owner],
-			['Last valid day', m.expiresOn]
+			['Document', m.title],
+			['Kind', m.kindLabel],
+			['Filed on', m.filedOn],
+			['Valid until', m.expiresOn]
 		],
-		action: { label: 'Open the documents', href: m.link },
-		caution:
-			'Landfall only counts the dates. Whether a test summary or proof of origin is acceptable is for the issuer, the carrier and the customs authorities to decide.'
+		action: { label: 'Open the documents', href: m.link }
 	});
 }
