@@ -3,6 +3,10 @@ import { defineConfig } from '@playwright/test';
 // Drives the built app (node build) in Debian's Chromium; never a downloaded browser.
 const PORT = Number(process.env.E2E_PORT ?? 4390);
 const baseURL = `http://127.0.0.1:${PORT}`;
+// A second app process on the same database (tests/e2e/scaling-out.spec.ts): Landfall keeps no
+// state in its processes, so both must behave as one.
+const PORT_B = Number(process.env.E2E_PORT_B ?? PORT + 1);
+const baseURLB = `http://127.0.0.1:${PORT_B}`;
 const chromium = process.env.CHROMIUM_PATH ?? '/usr/lib/chromium/chromium';
 // The local Stripe fake the app pays through in these tests (scripts/stripe-fake).
 const FAKE_PORT = process.env.STRIPE_FAKE_PORT ?? '12111';
@@ -14,6 +18,33 @@ const stripe = {
 	STRIPE_SECRET_KEY: 'sk_test_landfall_e2e',
 	STRIPE_WEBHOOK_SECRET: 'whsec_landfall_e2e'
 };
+
+/** One `node build` of Landfall on its own port, against the test database. */
+function appProcess(port: number, origin: string) {
+	return {
+		command: 'node build',
+		url: `${origin}/api/health`,
+		timeout: 60_000,
+		reuseExistingServer: false,
+		stdout: 'pipe' as const,
+		env: {
+			PORT: String(port),
+			HOST: '127.0.0.1',
+			ORIGIN: origin,
+			BODY_SIZE_LIMIT: '11M',
+			DATABASE_URL: process.env.DATABASE_URL ?? '',
+			AUTH_SECRET: process.env.AUTH_SECRET ?? '',
+			...stripe,
+			STRIPE_API_HOST: '127.0.0.1',
+			STRIPE_API_PORT: FAKE_PORT,
+			STRIPE_API_PROTOCOL: 'http',
+			SMTP_HOST: '127.0.0.1',
+			SMTP_PORT,
+			MAIL_POLL_MS: '300',
+			MAIL_RETRY_BASE_MS: '1000'
+		}
+	};
+}
 
 export default defineConfig({
 	testDir: 'tests/e2e',
@@ -63,28 +94,7 @@ export default defineConfig({
 			stdout: 'pipe',
 			env: { MAIL_CATCHER_SMTP_PORT: SMTP_PORT, MAIL_CATCHER_WEB_PORT: MAIL_WEB_PORT }
 		},
-		{
-			command: 'node build',
-			url: `${baseURL}/api/health`,
-			timeout: 60_000,
-			reuseExistingServer: false,
-			stdout: 'pipe',
-			env: {
-				PORT: String(PORT),
-				HOST: '127.0.0.1',
-				ORIGIN: baseURL,
-				BODY_SIZE_LIMIT: '11M',
-				DATABASE_URL: process.env.DATABASE_URL ?? '',
-				AUTH_SECRET: process.env.AUTH_SECRET ?? '',
-				...stripe,
-				STRIPE_API_HOST: '127.0.0.1',
-				STRIPE_API_PORT: FAKE_PORT,
-				STRIPE_API_PROTOCOL: 'http',
-				SMTP_HOST: '127.0.0.1',
-				SMTP_PORT,
-				MAIL_POLL_MS: '300',
-				MAIL_RETRY_BASE_MS: '1000'
-			}
-		}
+		appProcess(PORT, baseURL),
+		appProcess(PORT_B, baseURLB)
 	]
 });

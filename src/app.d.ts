@@ -14,6 +14,8 @@ declare global {
 		interface Locals {
 			/** The signed-in, enabled user read from the database, or null. */
 			user: SessionUser | null;
+			/** Set by handleError when the request failed because PostgreSQL was unreachable. */
+			databaseOutage?: boolean;
 		}
 	}
 }

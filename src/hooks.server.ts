@@ -12,6 +12,7 @@ import { env } from '$env/dynamic/private';
 import { extraPolicy } from '$lib/server/content-security';
 import { building } from '$app/environment';
 import { db } from '$lib/server/db';
+import { isDatabaseOutage, OUTAGE_MESSAGE, RETRY_AFTER_SECONDS } from '$lib/server/db/outage';
 import { startMailDispatcher, stopMailDispatcher } from '$lib/server/mail';
 import { userForToken } from '$lib/server/services/api-tokens';
 
@@ -99,7 +100,47 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
+/** A plain answer for a request that failed while PostgreSQL was unreachable: 503, Retry-After. */
+function outageResponse(event: Parameters<Handle>[0]['event']): Response {
+	const headers = { 'retry-after': String(RETRY_AFTER_SECONDS), 'cache-control': 'no-store' };
+	const wantsJson =
+		isApiPath(event.url.pathname) ||
+		event.request.headers.get('x-sveltekit-action') === 'true' ||
+		event.url.pathname.endsWith('/__data.json');
+	if (wantsJson)
+		return json(
+			{ message: OUTAGE_MESSAGE, code: 'database_unavailable' },
+			{ status: 503, headers }
+		);
+	const page = `<!doctype html><html lang="en"><meta charset="utf-8"><title>Landfall: try again shortly</title><body style="font-family:sans-serif;margin:3rem"><h1>Try again in a moment</h1><p>${OUTAGE_MESSAGE}</p></body></html>`;
+	return new Response(page, {
+		status: 503,
+		headers: { ...headers, 'content-type': 'text/html; charset=utf-8' }
+	});
+}
+
+// Outermost: a request that failed because the database was unreachable (in a hook, a load, an
+// action or an endpoint) answers 503 with Retry-After, never a 500; the pool reconnects by itself.
+const answerOutages: Handle = async ({ event, resolve }) => {
+	let response: Response;
+	try {
+		response = await resolve(event);
+	} catch (e) {
+		if (!isDatabaseOutage(e)) throw e;
+		console.error(`[database] ${event.request.method} ${event.url.pathname}: unreachable`);
+		return outageResponse(event);
+	}
+	if (event.locals.databaseOutage && response.status === 500) {
+		// SvelteKit's own error page or JSON, already carrying OUTAGE_MESSAGE: only the status changes.
+		const headers = new Headers(response.headers);
+		headers.set('retry-after', String(RETRY_AFTER_SECONDS));
+		return new Response(response.body, { status: 503, headers });
+	}
+	return response;
+};
+
 export const handle = sequence(
+	answerOutages,
 	closeAuthEndpoints,
 	authHandle,
 	loadUser,
@@ -109,6 +150,11 @@ export const handle = sequence(
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (status === 404) return { message: 'Not found' };
+	if (isDatabaseOutage(error)) {
+		event.locals.databaseOutage = true;
+		console.error(`[database] ${event.request.method} ${event.url.pathname}: unreachable`);
+		return { message: OUTAGE_MESSAGE, code: 'database_unavailable' };
+	}
 	const id = crypto.randomUUID();
 	try {
 		console.error(`[error ${id}] ${event.request.method} ${event.url.pathname}`, error);

@@ -40,6 +40,8 @@ export interface StripeFakeOptions {
 	retryBaseMs?: number;
 	maxAttempts?: number;
 	log?: (line: string) => void;
+	/** What an earlier run held, so a restarted fake still knows it (as Stripe would). */
+	store?: Store;
 }
 
 export interface StripeFake {
@@ -106,7 +108,7 @@ async function readBody(req: IncomingMessage): Promise<string> {
 export async function startStripeFake(options: StripeFakeOptions): Promise<StripeFake> {
 	const host = options.host ?? '127.0.0.1';
 	const log = options.log ?? (() => {});
-	const store = new Store();
+	const store = options.store ?? new Store();
 	const deliveries: Delivery[] = [];
 	const pending = new Set<Promise<unknown>>();
 	let base = '';

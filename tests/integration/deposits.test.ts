@@ -2,9 +2,6 @@
 // Stripe fake (scripts/stripe-fake) on 127.0.0.1:12111. The fake delivers its signed webhooks to
 // a small receiver here that hands them to the app's own webhook route (POST handler).
 // If the SDK accepts the fake's answers, they are shaped as Stripe's.
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import type { RequestEvent } from '@sveltejs/kit';
 import Decimal from 'decimal.js';
 import { QueryTypes } from 'sequelize';
 import Stripe from 'stripe';
@@ -27,8 +24,12 @@ import type { ServiceResult } from '$lib/server/services/result';
 import { depositRequestSchema } from '$lib/schemas/deposits';
 import { startStripeFake, type StripeFake } from '../../scripts/stripe-fake/app';
 import { signatureHeader } from '../../scripts/stripe-fake/webhooks';
-import { POST as webhook } from '../../src/routes/api/v1/stripe/webhook/+server';
 import { countRows, sequelize, sessionUserFor } from './db';
+import {
+	callWebhook as callWebhookAt,
+	startWebhookReceiver,
+	type WebhookReceiver
+} from './webhook-receiver';
 
 const FAKE_PORT = Number(process.env.STRIPE_FAKE_PORT ?? 12111);
 const config: StripeConfig = {
@@ -42,7 +43,7 @@ const ORIGIN = 'http://127.0.0.1:4999';
 const context = { origin: ORIGIN, ip: '198.51.100.90' }; // RFC 5737 TEST-NET-2
 
 let fake: StripeFake;
-let receiver: Server;
+let receiver: WebhookReceiver | undefined;
 /** The receiver answers 500 to this many deliveries first, to make the fake retry. */
 let failNext = 0;
 const answers: number[] = [];
@@ -55,43 +56,18 @@ let wattlebird = '';
 const created: string[] = [];
 
 const callWebhook = (body: string, signature: string | null) =>
-	webhook({
-		request: new Request(`${ORIGIN}/api/v1/stripe/webhook`, {
-			method: 'POST',
-			headers: signature ? { 'stripe-signature': signature } : {},
-			body
-		})
-	} as unknown as RequestEvent<Record<string, never>, '/api/v1/stripe/webhook'>);
+	callWebhookAt(ORIGIN, body, signature);
 
 beforeAll(async () => {
-	receiver = createServer((req, res) => {
-		const chunks: Buffer[] = [];
-		req.on('data', (c: Buffer) => chunks.push(c));
-		req.on('end', () => {
-			void (async () => {
-				if (failNext > 0) {
-					failNext--;
-					answers.push(500);
-					res.writeHead(500).end();
-					return;
-				}
-				const response = await callWebhook(
-					Buffer.concat(chunks).toString('utf8'),
-					(req.headers['stripe-signature'] as string) ?? null
-				);
-				answers.push(response.status);
-				res.writeHead(response.status, { 'content-type': 'application/json' });
-				res.end(await response.text());
-			})();
-		});
+	receiver = await startWebhookReceiver(ORIGIN, {
+		intercept: () => (failNext > 0 ? (failNext--, 500) : null),
+		answered: (status) => answers.push(status)
 	});
-	await new Promise<void>((r) => receiver.listen(0, '127.0.0.1', r));
-	const port = (receiver.address() as AddressInfo).port;
 	fake = await startStripeFake({
 		port: FAKE_PORT,
 		apiKey: config.secretKey,
 		webhookSecret: config.webhookSecret,
-		webhookUrl: `http://127.0.0.1:${port}/`,
+		webhookUrl: receiver.url,
 		retryBaseMs: 20,
 		maxAttempts: 5
 	});
@@ -109,7 +85,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
 	await fake?.close();
-	await new Promise((r) => receiver?.close(r));
+	await receiver?.close();
 	if (created.length) {
 		await sequelize.query('DELETE FROM stripe_events WHERE deposit_id IN (:ids)', {
 			replacements: { ids: created }

@@ -316,3 +316,59 @@ describe('numbering under concurrency', () => {
 		expect(sequences.at(-1)! - sequences[0]!).toBe(49);
 	}, 120_000);
 });
+
+describe('a failure in the middle of issuing', () => {
+	// Fault injection in the database itself: a trigger fails the second paper's insert, after the
+	// invoice's number was taken and its row written in the same transaction.
+	it('leaves no half record: no paper, no number used, the shipment as it was', async () => {
+		const id = await bookedShipment();
+		const before = await Shipment.findByPk(id, { rejectOnEmpty: true });
+		await sequelize.query(`
+			CREATE FUNCTION itest_fail_packing_list() RETURNS trigger LANGUAGE plpgsql AS $$
+			BEGIN
+				IF NEW.kind = 'packing_list' AND NEW.shipment_id = '${id}' THEN
+					RAISE EXCEPTION 'injected failure while writing the packing list';
+				END IF;
+				RETURN NEW;
+			END $$;
+			CREATE TRIGGER itest_fail_packing_list BEFORE INSERT ON shipment_documents
+				FOR EACH ROW EXECUTE FUNCTION itest_fail_packing_list();`);
+		try {
+			await expect(
+				issuePapers(coordinator, id, { kinds: [...BOTH], reason: '' }, IP)
+			).rejects.toThrow(/injected failure/);
+		} finally {
+			await sequelize.query(`
+				DROP TRIGGER itest_fail_packing_list ON shipment_documents;
+				DROP FUNCTION itest_fail_packing_list();`);
+		}
+		expect(await documents(id)).toEqual([]);
+		const after = await Shipment.findByPk(id, { rejectOnEmpty: true });
+		expect({ status: after.status, version: after.version }).toEqual({
+			status: before.status,
+			version: before.version
+		});
+		const audits = await sequelize.query(
+			"SELECT 1 FROM audit_events WHERE entity_id = :id AND action LIKE 'documents.%'",
+			{ replacements: { id }, type: QueryTypes.SELECT }
+		);
+		expect(audits).toEqual([]);
+		// The numbers stay gap-free: the next issue takes the next number, and every sequence of the
+		// counter belongs to a paper.
+		const issued = ok(
+			await issuePapers(coordinator, id, { kinds: [...BOTH], reason: '' }, IP),
+			'issue'
+		);
+		expect(issued.papers).toHaveLength(2);
+		const [check] = await sequelize.query<{ counter: number; papers: string }>(
+			`SELECT c.last_sequence AS counter,
+			        (SELECT count(DISTINCT d.sequence) FROM shipment_documents d
+			          WHERE d.exporter_id = c.exporter_id AND d.kind = c.kind AND d.year = c.year) AS papers
+			   FROM document_counters c
+			   JOIN shipment_documents s ON s.exporter_id = c.exporter_id AND s.kind = c.kind AND s.year = c.year
+			  WHERE s.shipment_id = :id AND c.kind = 'commercial_invoice'`,
+			{ replacements: { id }, type: QueryTypes.SELECT }
+		);
+		expect(Number(check!.papers)).toBe(check!.counter);
+	});
+});
