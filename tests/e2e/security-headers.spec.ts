@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, DEMO_PASSWORD, signInPage } from './helpers';
 
 // The Content-Security-Policy must not break any screen: each page below is opened with the
 // browser reporting every violation, and the headers themselves are checked once.
@@ -30,6 +30,27 @@ test('pages carry the security headers and a policy that blocks foreign scripts'
 	expect(headers['x-frame-options']).toBe('DENY');
 	expect(headers['referrer-policy']).toBe('same-origin');
 	expect(headers['cross-origin-opener-policy']).toBe('same-origin');
+});
+
+test('the session cookie is HttpOnly and SameSite=Lax (and Secure when ORIGIN is https)', async ({
+	request,
+	baseURL
+}) => {
+	const response = await request.post('/signin', {
+		form: { email: DEMO.coordinator, password: DEMO_PASSWORD },
+		headers: { accept: 'application/json', origin: baseURL! }
+	});
+	const session = response
+		.headersArray()
+		.filter((h) => h.name.toLowerCase() === 'set-cookie')
+		.map((h) => h.value)
+		.find((v) => /^(__Secure-)?authjs\.session-token=/.test(v));
+	expect(session).toBeDefined();
+	expect(session).toMatch(/; HttpOnly/i);
+	expect(session).toMatch(/; SameSite=Lax/i);
+	expect(session).toMatch(/; Path=\//i);
+	// These tests run over http on loopback, so no Secure flag here; with ORIGIN=https://… Auth.js
+	// names it __Secure-authjs.session-token and adds Secure (README, "Security notes").
 });
 
 test('no screen breaks the Content-Security-Policy', async ({ page }) => {

@@ -374,7 +374,7 @@ describe('createUserSchema and updateUserSchema', () => {
 		email: 'ana.lim@solvrae.example',
 		role: 'finance',
 		organizationId: '3f2b6c1e-8d4a-4c2e-9b7f-1a2b3c4d5e6f',
-		password: 'x'.repeat(PASSWORD_MIN_LENGTH)
+		password: 'harbour-tide'.padEnd(PASSWORD_MIN_LENGTH, '7')
 	};
 
 	function messages(input: unknown, field: string): string[] {
@@ -389,19 +389,31 @@ describe('createUserSchema and updateUserSchema', () => {
 
 	it('agrees with the password limits in auth/password.ts', () => {
 		expect([PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH]).toEqual([12, 128]);
-		expect(PASSWORD_RULE).toBe('At least 12 and at most 128 characters.');
+		expect(PASSWORD_RULE).toBe(
+			'At least 12 and at most 128 characters; not a common or easily guessed one.'
+		);
 		expect(
-			createUserSchema.safeParse({ ...valid, password: 'x'.repeat(PASSWORD_MAX_LENGTH) }).success
+			createUserSchema.safeParse({
+				...valid,
+				password: 'a quiet harbour at dawn '.repeat(6).slice(0, PASSWORD_MAX_LENGTH)
+			}).success
 		).toBe(true);
+		expect(messages({ ...valid, password: 'password1234' }, 'password')).toEqual([
+			'This password is on lists of common passwords: choose another.'
+		]);
 	});
 
 	it('explains a short or long password', () => {
 		expect(
 			messages({ ...valid, password: 'x'.repeat(PASSWORD_MIN_LENGTH - 1) }, 'password')
-		).toEqual(['Password too short: At least 12 and at most 128 characters.']);
+		).toEqual([
+			'Password too short: At least 12 and at most 128 characters; not a common or easily guessed one.'
+		]);
 		expect(
 			messages({ ...valid, password: 'x'.repeat(PASSWORD_MAX_LENGTH + 1) }, 'password')
-		).toEqual(['Password too long: At least 12 and at most 128 characters.']);
+		).toEqual([
+			'Password too long: At least 12 and at most 128 characters; not a common or easily guessed one.'
+		]);
 	});
 
 	it('explains every other bad field', () => {

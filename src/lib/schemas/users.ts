@@ -1,8 +1,10 @@
 import { z } from 'zod';
+import { passwordWeakness } from '../password-weakness';
 import { ROLES } from '../roles';
 
 // Shared by the admin forms (superforms) and the /api/v1/users endpoints.
-export const PASSWORD_RULE = 'At least 12 and at most 128 characters.';
+export const PASSWORD_RULE =
+	'At least 12 and at most 128 characters; not a common or easily guessed one.';
 
 const name = z
 	.string()
@@ -13,7 +15,12 @@ const role = z.enum(ROLES, { error: 'Choose one of the roles.' });
 const password = z
 	.string()
 	.min(12, `Password too short: ${PASSWORD_RULE}`)
-	.max(128, `Password too long: ${PASSWORD_RULE}`);
+	.max(128, `Password too long: ${PASSWORD_RULE}`)
+	.superRefine((value, ctx) => {
+		// Only once the length is right, so one message at a time.
+		const weakness = value.length >= 12 && value.length <= 128 ? passwordWeakness(value) : null;
+		if (weakness) ctx.addIssue({ code: 'custom', message: weakness });
+	});
 
 export const createUserSchema = z.object({
 	name,
