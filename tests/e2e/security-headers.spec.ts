@@ -53,6 +53,20 @@ test('the session cookie is HttpOnly and SameSite=Lax (and Secure when ORIGIN is
 	// names it __Secure-authjs.session-token and adds Secure (README, "Security notes").
 });
 
+test('a form posted from another origin is refused (SvelteKit’s origin check is on)', async ({
+	request
+}) => {
+	for (const origin of ['http://evil.example', 'null']) {
+		const response = await request.post('/signin', {
+			form: { email: DEMO.coordinator, password: DEMO_PASSWORD },
+			headers: { origin },
+			maxRedirects: 0
+		});
+		expect(response.status(), origin).toBe(403);
+		expect(response.headers()['set-cookie'] ?? '').not.toContain('session-token');
+	}
+});
+
 test('no screen breaks the Content-Security-Policy', async ({ page }) => {
 	test.setTimeout(90_000);
 	const violations = await collectViolations(page);

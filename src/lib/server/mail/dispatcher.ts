@@ -98,13 +98,21 @@ export function startPolling(
 	let stopped = false;
 	let running: Promise<unknown> = Promise.resolve();
 	let timer: ReturnType<typeof setTimeout> | undefined;
+	// A database outage fails every round alike: say so once, and again when it is over.
+	let lastFailure = '';
 	const round = () => {
 		running = dispatchDue(transport, options)
 			.then((o) => {
+				if (lastFailure) options.log?.('mail: dispatching again');
+				lastFailure = '';
 				if (o.retried || o.failed)
 					options.log?.(`mail: ${o.sent} sent, ${o.retried} to retry, ${o.failed} failed`);
 			})
-			.catch((error) => options.log?.(`mail: dispatch round failed: ${String(error)}`))
+			.catch((error) => {
+				const failure = String(error);
+				if (failure !== lastFailure) options.log?.(`mail: dispatch round failed: ${failure}`);
+				lastFailure = failure;
+			})
 			.finally(() => {
 				if (!stopped) timer = setTimeout(round, intervalMs);
 			});
