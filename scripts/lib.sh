@@ -62,6 +62,18 @@ ensure_build() {
 	echo "$want" >"$stamp"
 }
 
+# 0 once URL ($2) answers 2xx; 1 when process $1 has exited first or after about 10 s.
+wait_for_health() {
+	local pid=$1 url=$2 i
+	for i in $(seq 1 50); do
+		node -e "fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" \
+			"$url" && return 0
+		kill -0 "$pid" 2>/dev/null || return 1
+		sleep 0.2
+	done
+	return 1
+}
+
 # Card payments: the local Stripe fake (scripts/stripe-fake) on loopback, unless a real Stripe
 # key is configured (STRIPE_SECRET_KEY set without STRIPE_API_HOST: Stripe's own test mode).
 # Exports the STRIPE_* variables the app reads. Call after ORIGIN is set; stop_stripe_fake stops it.
@@ -79,13 +91,7 @@ start_stripe_fake() {
 	# node --import tsx: one process, so stopping it by its id stops the fake.
 	node --import tsx scripts/stripe-fake/main.ts &
 	STRIPE_FAKE_PID=$!
-	local i
-	for i in $(seq 1 50); do
-		node -e "fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" \
-			"http://127.0.0.1:$STRIPE_FAKE_PORT/health" && return 0
-		kill -0 "$STRIPE_FAKE_PID" 2>/dev/null || break
-		sleep 0.2
-	done
+	wait_for_health "$STRIPE_FAKE_PID" "http://127.0.0.1:$STRIPE_FAKE_PORT/health" && return 0
 	echo "The local Stripe fake did not start on port $STRIPE_FAKE_PORT (is the port taken?)." >&2
 	exit 1
 }
@@ -114,13 +120,7 @@ start_mail_catcher() {
 	say "Starting the local mail catcher (SMTP 127.0.0.1:$MAIL_CATCHER_SMTP_PORT, web $MAIL_CATCHER_URL)"
 	node --import tsx scripts/mail-catcher/main.ts &
 	MAIL_CATCHER_PID=$!
-	local i
-	for i in $(seq 1 50); do
-		node -e "fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" \
-			"$MAIL_CATCHER_URL/health" && return 0
-		kill -0 "$MAIL_CATCHER_PID" 2>/dev/null || break
-		sleep 0.2
-	done
+	wait_for_health "$MAIL_CATCHER_PID" "$MAIL_CATCHER_URL/health" && return 0
 	echo "The local mail catcher did not start on ports $MAIL_CATCHER_SMTP_PORT/$MAIL_CATCHER_WEB_PORT (is a port taken?)." >&2
 	exit 1
 }
