@@ -41,6 +41,12 @@ export default defineConfig({
 			]
 		}
 	},
+	// The fuzzer compares every table before and after each refused request, so it runs alone,
+	// once all other specs have finished (a failure elsewhere skips it; --no-deps runs it alone).
+	projects: [
+		{ name: 'main', testIgnore: /fuzz\.spec\.ts/ },
+		{ name: 'fuzz', testMatch: /fuzz\.spec\.ts/, dependencies: ['main'] }
+	],
 	webServer: [
 		{
 			command: 'node --import tsx scripts/stripe-fake/main.ts',
