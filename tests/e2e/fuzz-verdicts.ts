@@ -84,3 +84,9 @@ export function judgeAction(status: number, contentType: string, text: string): 
 	}
 	return { rejected: false, status: code, problems };
 }
+
+/** A page's GET: never a 5xx (a 4xx renders the error page, which is fine). */
+export function judgePage(status: number, text: string): Verdict {
+	const problems = status >= 500 ? [`status ${status}: ${text.slice(0, 300)}`] : [];
+	return { rejected: status >= 400, status, problems };
+}

@@ -8,10 +8,14 @@ import {
 	formRequest,
 	queryCase,
 	queryString,
+	type ApiCase,
+	type FormCase,
+	type QueryCase,
 	type RawRequest
 } from './fuzz-requests';
-import { judgeAction, judgeApi, type Verdict } from './fuzz-verdicts';
+import { judgeAction, judgeApi, judgePage, type Verdict } from './fuzz-verdicts';
 import { DEMO, apiAs } from './helpers';
+import { operation, requestSchema, skeleton, type OpenApi } from './openapi-skeleton';
 import {
 	WHO,
 	allProbes,
@@ -25,93 +29,33 @@ import { findForms, pageForms, parseActionResult } from './superform-data';
 
 // Hostile input to every mutating probe of route-probes.ts (form actions and API) and to every
 // query a GET reads, as a role that gets past the role check, so the validation is what is
-// tested: never a 5xx, refusals that name the fields, and a database unchanged after every
-// refused request. The seed is printed; FUZZ_SEED, FUZZ_RUNS and FUZZ_ONLY (a substring of the
-// test title) reproduce a failure (DEVELOPERS.md, "Fuzzing").
+// tested: never a 5xx, refusals that say why (field errors, field paths), and a database
+// unchanged after every refused request. The seed is printed; FUZZ_SEED, FUZZ_RUNS and
+// FUZZ_ONLY (a substring of the test title) reproduce a failure (DEVELOPERS.md, "Fuzzing").
 //
 // This file runs in the Playwright project "fuzz", after all other specs and alone (see
 // playwright.config.ts), because the fingerprint covers every table.
 
 const SEED = Number(process.env.FUZZ_SEED ?? 20261204);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 15);
+const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
 const ONLY = process.env.FUZZ_ONLY ?? '';
 
-type Target = Probe & { id: string; kind: 'action' | 'api' | 'query' };
+type Kind = 'action' | 'api' | 'query' | 'page-query';
+type Target = Probe & { id: string; kind: Kind };
 
-interface OpenApi {
-	paths: Record<string, Record<string, OpenApiOperation>>;
-	components: { schemas: Record<string, JsonSchema> };
-}
-interface OpenApiOperation {
-	parameters?: { in: string; name: string }[];
-	requestBody?: { content?: Record<string, { schema?: JsonSchema }> };
-}
-interface JsonSchema {
-	$ref?: string;
-	type?: string | string[];
-	properties?: Record<string, JsonSchema>;
-	items?: JsonSchema;
-	enum?: unknown[];
-	const?: unknown;
-	format?: string;
-	anyOf?: JsonSchema[];
-	oneOf?: JsonSchema[];
-	allOf?: JsonSchema[];
-	default?: unknown;
-}
-
-/** The OpenAPI path template of a concrete /api/v1 path (ids become {…}). */
-function openApiPath(path: string): string {
-	return path
-		.split('?')[0]!
-		.replace(/^\/api\/v1/, '')
-		.replace(/\/:[a-zA-Z]+/g, '/{}')
-		.replace(/\/[0-9a-f-]{36}/g, '/{}');
-}
-
-function operation(spec: OpenApi, path: string, method: string): OpenApiOperation | undefined {
-	const wanted = openApiPath(path);
-	const entry = Object.entries(spec.paths).find(([p]) => p.replace(/\{[^}]+\}/g, '{}') === wanted);
-	return entry?.[1][method.toLowerCase()];
-}
-
-/** A skeleton value of a JSON schema: every property, one item per list, the first choice. */
-function skeleton(spec: OpenApi, schema: JsonSchema | undefined, depth = 0): unknown {
-	if (!schema || depth > 6) return null;
-	if (schema.$ref) {
-		const name = schema.$ref.split('/').pop()!;
-		return skeleton(spec, spec.components.schemas[name], depth + 1);
-	}
-	if (schema.default !== undefined) return schema.default;
-	if (schema.const !== undefined) return schema.const;
-	if (schema.enum) return schema.enum[0];
-	const choice = schema.anyOf ?? schema.oneOf;
-	if (choice) return skeleton(spec, choice[choice.length - 1], depth + 1);
-	if (schema.allOf) {
-		return Object.assign({}, ...schema.allOf.map((s) => skeleton(spec, s, depth + 1)));
-	}
-	const type = Array.isArray(schema.type) ? schema.type[0] : schema.type;
-	if (type === 'object' || schema.properties) {
-		return Object.fromEntries(
-			Object.entries(schema.properties ?? {}).map(([k, s]) => [k, skeleton(spec, s, depth + 1)])
-		);
-	}
-	if (type === 'array') return [skeleton(spec, schema.items, depth + 1)];
-	if (type === 'integer' || type === 'number') return 1;
-	if (type === 'boolean') return false;
-	if (schema.format === 'uuid') return '00000000-0000-4000-8000-000000000000';
-	if (schema.format === 'date') return '2026-12-01';
-	return 'x';
-}
+const targets: Target[] = allProbes().flatMap((probe): Target[] => {
+	const api = probe.path.startsWith('/api/');
+	if (probe.method !== 'GET') return [{ ...probe, kind: api ? 'api' : 'action' }];
+	if (api && probe.path.startsWith('/api/v1/')) return [{ ...probe, kind: 'query' }];
+	return probe.path.includes('?') ? [{ ...probe, kind: 'page-query' }] : [];
+});
 
 /** The first role that gets past the probe's role check (not 303 / 401 / 403 / 404). */
 function fuzzRole(probe: Probe): Who {
 	const order: Who[] = ['admin', 'coordinator', 'finance', 'customer', 'broker', 'anonymous'];
-	return (
-		order.find(
-			(who) => ![303, 401, 403, 404].includes(probe.expect[who] ?? probe.expect.default)
-		) ?? 'admin'
-	);
+	const passes = (who: Who) =>
+		![303, 401, 403, 404].includes(probe.expect[who] ?? probe.expect.default);
+	return order.find(passes) ?? 'admin';
 }
 
 /** A seed per target from the run's seed, so adding a route leaves the others' cases alone. */
@@ -149,18 +93,133 @@ interface ShipmentJson extends Record<string, unknown> {
 	lines: { productId: string; quantity: number; unitPrice: string }[];
 }
 
-function headerOf(shipment: ShipmentJson): Record<string, unknown> {
-	return Object.fromEntries(HEADER_FIELDS.map((k) => [k, shipment[k] ?? '']));
+const headerOf = (s: ShipmentJson) => Object.fromEntries(HEADER_FIELDS.map((k) => [k, s[k] ?? '']));
+const linesOf = (s: ShipmentJson) =>
+	s.lines.map(({ productId, quantity, unitPrice }) => ({ productId, quantity, unitPrice }));
+
+function judge(kind: Kind, status: number, contentType: string, text: string): Verdict {
+	if (kind === 'action') return judgeAction(status, contentType, text);
+	if (kind === 'page-query') return judgePage(status, text);
+	return judgeApi(status, contentType, text);
 }
 
-const targets: Target[] = allProbes().flatMap((probe): Target[] => {
-	if (probe.method !== 'GET') {
-		return [{ ...probe, kind: probe.path.startsWith('/api/') ? 'api' : 'action' }];
-	}
-	return probe.path.includes('?') || probe.path.startsWith('/api/v1/')
-		? [{ ...probe, kind: 'query' }]
-		: [];
+const urlencoded = (fields: Record<string, string>): RawRequest => ({
+	headers: {
+		'x-sveltekit-action': 'true',
+		accept: 'application/json',
+		'content-type': 'application/x-www-form-urlencoded'
+	},
+	data: new URLSearchParams(fields).toString()
 });
+
+/** Bodies that answered 500 (or wrote half) before the fixes of issue 9, kept as regressions. */
+interface Regression {
+	title: string;
+	who: Who;
+	method: 'POST' | 'PATCH';
+	path: string;
+	kind: Kind;
+	request: (ship: ShipmentJson) => RawRequest;
+	/** Text the refusal must carry (the field's error). */
+	says: string;
+}
+
+const REGRESSIONS: Regression[] = [
+	{
+		title: 'NUL in a place name (PostgreSQL cannot store it)',
+		who: 'coordinator',
+		method: 'POST',
+		path: '/places',
+		kind: 'action',
+		request: () =>
+			urlencoded({ code: 'DEZZZ', name: 'Bre\u0000men', kind: 'seaport', countryCode: 'DE' }),
+		says: 'NUL'
+	},
+	{
+		title: 'a text/plain body to an action that reads the form itself',
+		who: 'coordinator',
+		method: 'POST',
+		path: '/places/:place?/retire',
+		kind: 'action',
+		request: () => ({
+			headers: { ...urlencoded({}).headers, 'content-type': 'text/plain' },
+			data: 'version=1'
+		}),
+		says: 'could not be read'
+	},
+	{
+		title: 'a list posted as a plain field (superforms threw)',
+		who: 'finance',
+		method: 'POST',
+		path: '/reference/settings',
+		kind: 'action',
+		request: () => urlencoded({ insuranceRatePercent: '0.3', brokerage: 'x', version: '0' }),
+		says: 'list or a group'
+	},
+	{
+		title: 'a cycle in __superform_json (stack overflow)',
+		who: 'coordinator',
+		method: 'POST',
+		path: '/places',
+		kind: 'action',
+		request: () => urlencoded({ __superform_json: '[{"countryCode":0}]' }),
+		says: 'not one the form can take'
+	},
+	{
+		title: 'a file in a list of text fields (the failure could not be serialised)',
+		who: 'coordinator',
+		method: 'POST',
+		path: '/shipments/:ship?/issuePapers',
+		kind: 'action',
+		request: () => {
+			const boundary = 'landfall-regression';
+			const part = (name: string, extra = '', value = 'x') =>
+				`--${boundary}\r\nContent-Disposition: form-data; name="${name}"${extra}\r\n\r\n${value}\r\n`;
+			return {
+				headers: {
+					'x-sveltekit-action': 'true',
+					accept: 'application/json',
+					'content-type': `multipart/form-data; boundary=${boundary}`
+				},
+				data:
+					part('kinds', '; filename="a.pdf"', '%PDF-1.4') +
+					part('__superform_id', '', 'issue') +
+					`--${boundary}--\r\n`
+			};
+		},
+		says: 'A file cannot go in this field'
+	},
+	{
+		title: 'NUL in an API token name',
+		who: 'admin',
+		method: 'POST',
+		path: '/admin/users/:user?/issueToken',
+		kind: 'action',
+		request: () => urlencoded({ name: 'ERP\u0000export' }),
+		says: 'NUL'
+	},
+	{
+		title: 'NUL in a status note',
+		who: 'coordinator',
+		method: 'POST',
+		path: '/shipments/:ship?/status',
+		kind: 'action',
+		request: (s) => urlencoded({ to: 'booked', note: 'ok\u0000', version: String(s.version) }),
+		says: 'NUL'
+	},
+	{
+		title: 'NUL in the shipment notes through the API',
+		who: 'coordinator',
+		method: 'PATCH',
+		path: '/api/v1/shipments/:ship',
+		kind: 'api',
+		request: (s) => ({
+			headers: { 'content-type': 'application/json' },
+			data: JSON.stringify({ ...headerOf(s), notes: 'a\u0000b', version: s.version })
+		}),
+		says: '"path":"notes"'
+	}
+];
 
 test.describe('hostile input', () => {
 	const clients = new Map<Who, APIRequestContext>();
@@ -180,15 +239,12 @@ test.describe('hostile input', () => {
 		spec = (await (await admin.get('/api/v1/openapi.json')).json()) as OpenApi;
 		template = (await (await admin.get(`/api/v1/shipments/${ids.ship}`)).json()) as ShipmentJson;
 		// A person of the fuzzer's own, so a save that happens to pass never locks out a demo user.
-		const { users } = (await (await admin.get('/api/v1/users')).json()) as {
-			users: { email: string; organizationId: string }[];
-		};
 		const created = await admin.post('/api/v1/users', {
 			data: {
 				name: 'Fuzz Target',
 				email: `fuzz-${Date.now()}@solvrae.example`,
 				role: 'coordinator',
-				organizationId: users.find((u) => u.email === DEMO.coordinator)!.organizationId,
+				organizationId: ids.own.get('coordinator'),
 				password: 'Fuzz-target-password-2026'
 			}
 		});
@@ -202,19 +258,114 @@ test.describe('hostile input', () => {
 		for (const client of clients.values()) await client.dispose();
 	});
 
-	/** A new draft shipment like Hallvik's seeded one (same parties, broker and lines). */
-	async function freshShipment(admin: APIRequestContext): Promise<ShipmentJson> {
+	const shipmentJson = async (id: string) =>
+		(await (await clients.get('admin')!.get(`/api/v1/shipments/${id}`)).json()) as ShipmentJson;
+
+	/** A new draft like Hallvik's seeded shipment (same parties, broker and lines). */
+	async function freshShipment(): Promise<ShipmentJson> {
+		const admin = clients.get('admin')!;
 		const created = await admin.post('/api/v1/shipments', { data: headerOf(template) });
 		expect(created.status(), await created.text()).toBe(201);
 		const { id } = (await created.json()) as { id: string };
-		const lines = template.lines.map((l) => ({
-			productId: l.productId,
-			quantity: l.quantity,
-			unitPrice: l.unitPrice
-		}));
-		const put = await admin.put(`/api/v1/shipments/${id}/lines`, { data: { lines, version: 0 } });
+		const lines = { lines: linesOf(template), version: 0 };
+		const put = await admin.put(`/api/v1/shipments/${id}/lines`, { data: lines });
 		expect(put.status(), await put.text()).toBe(200);
-		return (await (await admin.get(`/api/v1/shipments/${id}`)).json()) as ShipmentJson;
+		return shipmentJson(id);
+	}
+
+	async function send(who: Who, method: string, kind: Kind, url: string, request: RawRequest) {
+		const response = await clients.get(who)!.fetch(url, {
+			method,
+			headers: request.headers,
+			data: request.data,
+			maxRedirects: 0,
+			timeout: 30_000
+		});
+		const text = await response.text();
+		const contentType = response.headers()['content-type'] ?? '';
+		return { text, verdict: judge(kind, response.status(), contentType, text) };
+	}
+
+	test('the fingerprint sees a saved change', async () => {
+		const before = await db.take();
+		await freshShipment();
+		expect(changedTables(before, await db.take())).toEqual(
+			expect.arrayContaining(['shipments', 'shipment_lines', 'audit_events'])
+		);
+	});
+
+	test('requests that once answered 500 are refused on their field', async () => {
+		const ship = await freshShipment();
+		const local: ProbeIds = { ...ids, ship: ship.id, user: fuzzUser };
+		for (const r of REGRESSIONS) {
+			const url = fillPath(r.path, local, r.who);
+			const before = await db.take();
+			const { text, verdict } = await send(r.who, r.method, r.kind, url, r.request(ship));
+			expect(verdict.problems, r.title).toEqual([]);
+			expect(verdict.status, r.title).toBe(400);
+			expect(text, r.title).toContain(r.says);
+			expect(changedTables(before, await db.take()), r.title).toEqual([]);
+		}
+	});
+
+	/** The known-good request of a target and how each fuzzed case becomes a request. */
+	async function casesFor(
+		target: Target,
+		who: Who,
+		url: string,
+		shipment: ShipmentJson | undefined
+	): Promise<{
+		arbitrary: fc.Arbitrary<unknown>;
+		make: (c: unknown) => RawRequest & { url: string };
+	}> {
+		const [path, query = ''] = url.split(/\?(.*)/s) as [string, string?];
+		if (target.kind === 'query' || target.kind === 'page-query') {
+			const base: Record<string, string> = Object.fromEntries(new URLSearchParams(query));
+			for (const p of operation(spec, path, 'GET')?.parameters ?? []) {
+				if (p.in === 'query') base[p.name] ??= '';
+			}
+			return {
+				arbitrary: queryCase,
+				make: (c) => ({ url: `${path}?${queryString(base, c as QueryCase)}`, headers: {} })
+			};
+		}
+		if (target.kind === 'api') {
+			let base = skeleton(spec, requestSchema(operation(spec, path, target.method)));
+			if (/^\/api\/v1\/shipments(\/[^/]+)?$/.test(path)) {
+				const current = shipment ? await shipmentJson(shipment.id) : template;
+				base = { ...headerOf(current), version: current.version };
+			} else if (path.endsWith('/lines') && shipment) {
+				const current = await shipmentJson(shipment.id);
+				base = { lines: linesOf(current), version: current.version };
+			} else if (base === null || typeof base !== 'object') {
+				base = target.body ?? {};
+			}
+			return {
+				arbitrary: apiCase,
+				make: (c) => ({ url, ...apiRequest(base, c as ApiCase) })
+			};
+		}
+		// A form action: its answer to the probe's form names the superform (if any); the page's
+		// data has that form's current, valid values (and the version other forms send).
+		const client = clients.get(who)!;
+		const discovery = await client.post(url, {
+			headers: { 'x-sveltekit-action': 'true', accept: 'application/json' },
+			form: target.form ?? {},
+			maxRedirects: 0
+		});
+		const answered = discovery.headers()['content-type']?.includes('json')
+			? findForms(parseActionResult(await discovery.text()).data)
+			: [];
+		const onPage = await pageForms(client, path);
+		const form = answered[0];
+		const current = form ? onPage.find((f) => f.id === form.id) : undefined;
+		let base: Record<string, unknown> = current?.data ?? form?.data ?? { ...target.form };
+		const version = onPage.find((f) => typeof f.data.version === 'number')?.data.version;
+		if (!form && version !== undefined) base = { ...base, version };
+		return {
+			arbitrary: formCase(base),
+			make: (c) => ({ url, ...formRequest(base, form?.id, c as FormCase) })
+		};
 	}
 
 	for (const target of targets) {
@@ -224,137 +375,43 @@ test.describe('hostile input', () => {
 		test(title, async () => {
 			test.setTimeout(120_000);
 			const who = fuzzRole(target);
-			const client = clients.get(who)!;
-			const admin = clients.get('admin')!;
 			const local: ProbeIds = { ...ids, user: fuzzUser };
-			let shipment: ShipmentJson | undefined;
-			if (target.path.includes(':ship') && target.method !== 'GET') {
-				shipment = await freshShipment(admin);
-				local.ship = shipment.id;
-			}
+			// Mutations get a shipment of their own: one accepted status change or save must not
+			// turn the next target's cases into 409s.
+			const shipment =
+				target.path.includes(':ship') && target.method !== 'GET'
+					? await freshShipment()
+					: undefined;
+			if (shipment) local.ship = shipment.id;
 			const url = fillPath(target.path, local, who);
-			const [path, query = ''] = url.split(/\?(.*)/s) as [string, string?];
 			const seed = targetSeed(title);
 
-			// What a well-formed request looks like, and how each case becomes a request.
-			let build: () => Promise<{
-				arbitrary: fc.Arbitrary<unknown>;
-				make: (c: unknown) => RawRequest & { url: string };
-			}>;
-
-			if (target.kind === 'query') {
-				const op = path.startsWith('/api/') ? operation(spec, path, 'GET') : undefined;
-				const base: Record<string, string> = Object.fromEntries(new URLSearchParams(query));
-				for (const p of op?.parameters ?? []) if (p.in === 'query') base[p.name] ??= '';
-				build = async () => ({
-					arbitrary: queryCase as fc.Arbitrary<unknown>,
-					make: (c) => ({
-						url: `${path}?${queryString(base, c as Parameters<typeof queryString>[1])}`,
-						headers: {}
-					})
-				});
-			} else if (target.kind === 'api') {
-				const op = operation(spec, path, target.method);
-				build = async () => {
-					let base: unknown = skeleton(
-						spec,
-						op?.requestBody?.content?.['application/json']?.schema
-					);
-					if (/\/api\/v1\/shipments(\/[^/]+)?$/.test(path) && target.method !== 'GET') {
-						const current = shipment
-							? ((await (
-									await admin.get(`/api/v1/shipments/${shipment.id}`)
-								).json()) as ShipmentJson)
-							: template;
-						base = { ...headerOf(current), version: current.version };
-					} else if (path.endsWith('/lines') && shipment) {
-						const current = (await (
-							await admin.get(`/api/v1/shipments/${shipment.id}`)
-						).json()) as ShipmentJson;
-						base = {
-							lines: current.lines.map((l) => ({
-								productId: l.productId,
-								quantity: l.quantity,
-								unitPrice: l.unitPrice
-							})),
-							version: current.version
-						};
-					} else if (base === null || typeof base !== 'object') {
-						base = target.body ?? {};
-					}
-					return {
-						arbitrary: apiCase as fc.Arbitrary<unknown>,
-						make: (c) => ({ url, ...apiRequest(base, c as Parameters<typeof apiRequest>[1]) })
-					};
-				};
-			} else {
-				// A form action: the empty probe form tells which superform answers it; the page's
-				// data gives that form's current (valid) values.
-				const pagePath = path;
-				build = async () => {
-					const discovery = await client.post(url, {
-						headers: { 'x-sveltekit-action': 'true', accept: 'application/json' },
-						form: target.form ?? {},
-						maxRedirects: 0
-					});
-					const answered =
-						discovery.headers()['content-type']?.includes('json') === true
-							? findForms(parseActionResult(await discovery.text()).data)
-							: [];
-					const onPage = await pageForms(client, pagePath);
-					const form = answered[0];
-					const current = form ? onPage.find((f) => f.id === form.id) : undefined;
-					const version = onPage.find((f) => typeof f.data.version === 'number')?.data.version;
-					let base: Record<string, unknown> = current?.data ?? form?.data ?? { ...target.form };
-					if (!form && version !== undefined && 'version' in base) base = { ...base, version };
-					if (!form && version !== undefined && !('version' in base)) {
-						base = { ...base, version };
-					}
-					return {
-						arbitrary: formCase(base) as fc.Arbitrary<unknown>,
-						make: (c) => ({
-							url,
-							...formRequest(base, form?.id, c as Parameters<typeof formRequest>[2])
-						})
-					};
-				};
-			}
-
-			let built = await build();
+			let cases = await casesFor(target, who, url, shipment);
 			let before: Fingerprint = await db.take();
 			const statuses = new Map<number, number>();
-			const property = fc.asyncProperty(built.arbitrary, async (c) => {
-				const request = built.make(c);
-				const response = await client.fetch(request.url, {
-					method: target.method,
-					headers: request.headers,
-					data: request.data,
-					maxRedirects: 0,
-					timeout: 30_000
-				});
-				const text = await response.text();
-				const contentType = response.headers()['content-type'] ?? '';
-				const verdict: Verdict =
-					target.kind === 'action'
-						? judgeAction(response.status(), contentType, text)
-						: judgeApi(response.status(), contentType, text);
+			const property = fc.asyncProperty(cases.arbitrary, async (c) => {
+				const request = cases.make(c);
+				const { verdict } = await send(who, target.method, target.kind, request.url, request);
 				statuses.set(verdict.status, (statuses.get(verdict.status) ?? 0) + 1);
 				const after = await db.take();
 				if (verdict.rejected) {
 					const changed = changedTables(before, after);
-					if (changed.length) verdict.problems.push(`refused, yet changed: ${changed.join(', ')}`);
+					if (changed.length) verdict.problems.push(`refused, yet changed ${changed.join(', ')}`);
 					before = after;
-				} else {
-					// Saved: versions moved on, so the next cases start from the form as it is now.
-					if (target.kind !== 'query') built = await build();
+				} else if (target.kind === 'action' || target.kind === 'api') {
+					// Saved: versions moved on, so the next cases start from the record as it is now.
+					cases = await casesFor(target, who, url, shipment);
 					before = await db.take();
+				} else {
+					before = after;
 				}
 				if (verdict.problems.length) {
-					const shown =
+					const body =
 						typeof request.data === 'string' ? request.data : request.data?.toString('latin1');
 					throw new Error(
-						`${verdict.problems.join('; ')}\n  request: ${target.method} ${request.url.slice(0, 300)}` +
-							` ${JSON.stringify(request.headers)}\n  body: ${(shown ?? '').slice(0, 600)}`
+						`${verdict.problems.join('; ')}\n  request: ${target.method} ` +
+							`${request.url.slice(0, 300)} ${JSON.stringify(request.headers)}\n` +
+							`  body: ${JSON.stringify((body ?? '').slice(0, 600))}`
 					);
 				}
 			});

@@ -136,7 +136,12 @@ export const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: P
 			}
 		]
 	},
-	'/admin/audit': { page: [{ method: 'GET', path: '/admin/audit', expect: ADMIN_PAGE }] },
+	'/admin/audit': {
+		page: [
+			{ method: 'GET', path: '/admin/audit', expect: ADMIN_PAGE },
+			{ method: 'GET', path: '/admin/audit?page=2', expect: ADMIN_PAGE }
+		]
+	},
 	'/admin/mail': { page: [{ method: 'GET', path: '/admin/mail', expect: ADMIN_PAGE }] },
 	// Public: the token is the proof. An unknown one shows a page saying so; its form is refused.
 	'/set-password/[token]': {
@@ -198,7 +203,16 @@ export const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: P
 			}
 		]
 	},
-	'/shipments': { page: [{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 }] },
+	'/shipments': {
+		page: [
+			{ method: 'GET', path: '/shipments', expect: SIGNED_IN_200 },
+			{
+				method: 'GET',
+				path: '/shipments?status=booked&mode=air&q=SHP&sort=etd&dir=asc&page=1&pageSize=10',
+				expect: SIGNED_IN_200
+			}
+		]
+	},
 	'/places': {
 		page: [{ method: 'GET', path: '/places', expect: READ_PRODUCTS }],
 		actions: [{ method: 'POST', path: '/places', form: { code: '' }, expect: EDITOR_ACTION }]
@@ -641,7 +655,10 @@ export const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: P
 		]
 	},
 	'/api/v1/audit-events': {
-		api: [{ method: 'GET', path: '/api/v1/audit-events', expect: ADMIN_API }]
+		api: [
+			{ method: 'GET', path: '/api/v1/audit-events', expect: ADMIN_API },
+			{ method: 'GET', path: '/api/v1/audit-events?limit=5&offset=0', expect: ADMIN_API }
+		]
 	},
 	'/api/v1/openapi.json': {
 		api: [{ method: 'GET', path: '/api/v1/openapi.json', expect: API_200 }]
