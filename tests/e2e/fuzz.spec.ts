@@ -15,6 +15,13 @@ import {
 } from './fuzz-requests';
 import { judgeAction, judgeApi, judgePage, type Verdict } from './fuzz-verdicts';
 import { DEMO, apiAs } from './helpers';
+import {
+	freshShipment as copyShipment,
+	headerOf,
+	linesOf,
+	shipmentJson as readShipment,
+	type ShipmentJson
+} from './fuzz-fixtures';
 import { operation, requestSchema, skeleton, type OpenApi } from './openapi-skeleton';
 import {
 	WHO,
@@ -65,43 +72,31 @@ function targetSeed(title: string): number {
 	return hash >>> 0;
 }
 
-const HEADER_FIELDS = [
-	'customerId',
-	'consigneeId',
-	'notifyPartyId',
-	'brokerId',
-	'incoterm',
-	'incotermPlace',
-	'originId',
-	'destinationId',
-	'modesConsidered',
-	'chosenMode',
-	'currency',
-	'palletTypeId',
-	'carrier',
-	'vessel',
-	'voyageOrFlight',
-	'bookingNumber',
-	'etd',
-	'eta',
-	'notes'
-];
-
-interface ShipmentJson extends Record<string, unknown> {
-	id: string;
-	version: number;
-	lines: { productId: string; quantity: number; unitPrice: string }[];
-}
-
-const headerOf = (s: ShipmentJson) => Object.fromEntries(HEADER_FIELDS.map((k) => [k, s[k] ?? '']));
-const linesOf = (s: ShipmentJson) =>
-	s.lines.map(({ productId, quantity, unitPrice }) => ({ productId, quantity, unitPrice }));
-
 function judge(kind: Kind, status: number, contentType: string, text: string): Verdict {
 	if (kind === 'action') return judgeAction(status, contentType, text);
 	if (kind === 'page-query') return judgePage(status, text);
 	return judgeApi(status, contentType, text);
 }
+
+/** A small valid body of POST /api/v1/calc/measure, so mutations reach the packing checks. */
+const MEASURE_BASE = {
+	products: [
+		{
+			sku: 'FUZZ-1',
+			netKgPerUnit: '0.5',
+			packaging: {
+				unitsPerCarton: 10,
+				lengthMm: 400,
+				widthMm: 300,
+				heightMm: 250,
+				cartonGrossKg: '6.2',
+				orientation: 'this_way_up',
+				maxLoadOnTopKg: '40'
+			}
+		}
+	],
+	lines: [{ sku: 'FUZZ-1', quantity: 25 }]
+};
 
 const urlencoded = (fields: Record<string, string>): RawRequest => ({
 	headers: {
@@ -258,20 +253,8 @@ test.describe('hostile input', () => {
 		for (const client of clients.values()) await client.dispose();
 	});
 
-	const shipmentJson = async (id: string) =>
-		(await (await clients.get('admin')!.get(`/api/v1/shipments/${id}`)).json()) as ShipmentJson;
-
-	/** A new draft like Hallvik's seeded shipment (same parties, broker and lines). */
-	async function freshShipment(): Promise<ShipmentJson> {
-		const admin = clients.get('admin')!;
-		const created = await admin.post('/api/v1/shipments', { data: headerOf(template) });
-		expect(created.status(), await created.text()).toBe(201);
-		const { id } = (await created.json()) as { id: string };
-		const lines = { lines: linesOf(template), version: 0 };
-		const put = await admin.put(`/api/v1/shipments/${id}/lines`, { data: lines });
-		expect(put.status(), await put.text()).toBe(200);
-		return shipmentJson(id);
-	}
+	const shipmentJson = (id: string) => readShipment(clients.get('admin')!, id);
+	const freshShipment = () => copyShipment(clients.get('admin')!, template);
 
 	async function send(who: Who, method: string, kind: Kind, url: string, request: RawRequest) {
 		const response = await clients.get(who)!.fetch(url, {
@@ -337,6 +320,8 @@ test.describe('hostile input', () => {
 			} else if (path.endsWith('/lines') && shipment) {
 				const current = await shipmentJson(shipment.id);
 				base = { lines: linesOf(current), version: current.version };
+			} else if (path === '/api/v1/calc/measure') {
+				base = MEASURE_BASE;
 			} else if (base === null || typeof base !== 'object') {
 				base = target.body ?? {};
 			}
