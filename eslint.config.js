@@ -31,6 +31,27 @@ export default ts.config(
 		}
 	},
 	{
+		// Posted forms go through validateForm / readForm ($lib/server/forms), which turn bodies no
+		// page sends (wrong type, broken multipart, nested data as plain fields, NUL) into field
+		// errors; read directly, they were 500s (tests/e2e/fuzz.spec.ts).
+		files: ['src/routes/**/*.ts', 'src/lib/server/**/*.ts'],
+		ignores: ['src/lib/server/forms.ts', '**/*.test.ts'],
+		rules: {
+			'no-restricted-syntax': [
+				'error',
+				{
+					selector: "CallExpression[callee.property.name='formData']",
+					message: 'Read a posted form with readForm() from $lib/server/forms.'
+				},
+				{
+					selector:
+						"CallExpression[callee.name='superValidate'][arguments.0.type='MemberExpression'][arguments.0.property.name='request']",
+					message: 'Validate a posted form with validateForm() from $lib/server/forms.'
+				}
+			]
+		}
+	},
+	{
 		files: ['**/*.svelte', '**/*.svelte.ts'],
 		languageOptions: {
 			parserOptions: { parser: ts.parser, extraFileExtensions: ['.svelte'], svelteConfig }

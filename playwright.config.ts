@@ -14,6 +14,8 @@ const FAKE_PORT = process.env.STRIPE_FAKE_PORT ?? '12111';
 const SMTP_PORT = process.env.MAIL_CATCHER_SMTP_PORT ?? '12570';
 const MAIL_WEB_PORT = process.env.MAIL_CATCHER_WEB_PORT ?? '12571';
 const MAIL_CATCHER_URL = `http://127.0.0.1:${MAIL_WEB_PORT}`;
+/** fuzz.spec.ts, fuzz-uploads.spec.ts, fuzz-injection.spec.ts */
+const FUZZ_SPECS = /\/fuzz(-[a-z]+)?\.spec\.ts$/;
 const stripe = {
 	STRIPE_SECRET_KEY: 'sk_test_landfall_e2e',
 	STRIPE_WEBHOOK_SECRET: 'whsec_landfall_e2e'
@@ -72,6 +74,13 @@ export default defineConfig({
 			]
 		}
 	},
+	// The fuzz specs compare every table before and after each refused request, so they run
+	// alone and one at a time, once all other specs have finished (a failure elsewhere skips
+	// them; `--project=fuzz --no-deps` runs them by themselves).
+	projects: [
+		{ name: 'main', testIgnore: FUZZ_SPECS },
+		{ name: 'fuzz', testMatch: FUZZ_SPECS, dependencies: ['main'], workers: 1 }
+	],
 	webServer: [
 		{
 			command: 'node --import tsx scripts/stripe-fake/main.ts',

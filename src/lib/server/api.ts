@@ -1,6 +1,7 @@
 import { error, json } from '@sveltejs/kit';
 import type { z } from 'zod';
 import type { ServiceResult } from './services/result';
+import { NUL_MESSAGE, nulPaths } from '../schemas/nul-text';
 
 /** Parses a JSON body against a schema; anything else is a 400 naming each bad field's path. */
 export async function readJson<S extends z.ZodType>(
@@ -22,6 +23,14 @@ export async function readJson<S extends z.ZodType>(
 				path: issue.path.map(String).join('.'),
 				message: issue.message
 			}))
+		});
+	}
+	const nul = nulPaths(parsed.data);
+	if (nul.length) {
+		error(400, {
+			message: 'Some fields are missing or invalid.',
+			code: 'invalid_body',
+			issues: nul.map((path) => ({ path: path.map(String).join('.'), message: NUL_MESSAGE }))
 		});
 	}
 	return parsed.data;

@@ -5,7 +5,7 @@ import { containerTypeInputSchema, palletTypeInputSchema } from '../schemas/equi
 import { containerReference, palletReference } from '../reference/equipment-sources';
 import { requireRole } from './auth/guard';
 import type { SessionUser } from './auth/session-user';
-import { refuse } from './forms';
+import { refuse, validateForm } from './forms';
 import type { ServiceResult } from './services/result';
 import {
 	containerFormValues,
@@ -58,7 +58,7 @@ function pages<
 		},
 		async save(event: RequestEvent, id: string | null) {
 			const user = requireRole(event, 'admin', 'coordinator');
-			const form = await superValidate(event.request, k.schema);
+			const form = await validateForm(event.request, k.schema);
 			if (!form.valid) return fail(400, { form });
 			const result = await k.save(user, id, form.data, event.getClientAddress());
 			if (!result.ok) return refuse(form, result);

@@ -1,5 +1,6 @@
 import { fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import { requireRole } from './auth/guard';
+import { readForm } from './forms';
 import { removeRecord, setActive } from './services/master-data';
 
 // The retire, reinstate and remove actions of the place and party pages (same rules for both).
@@ -11,7 +12,7 @@ const PARAM = { place: 'placeId', party: 'partyId' } as const;
 function action(kind: Kind, op: 'retire' | 'reinstate' | 'remove') {
 	return async (event: RequestEvent) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const version = Number((await event.request.formData()).get('version'));
+		const version = Number((await readForm(event.request)).get('version'));
 		if (!Number.isInteger(version) || version < 0)
 			return fail(400, { stateError: 'The form was incomplete. Reload the page and try again.' });
 		const id = (event.params as Record<string, string>)[PARAM[kind]]!;

@@ -5,7 +5,7 @@ import { REFERENCE_DATA_EDITORS, REFERENCE_DATA_READERS, canEditReferenceData } 
 import { retireSchema } from '../schemas/reference-data';
 import { requireRole } from './auth/guard';
 import type { SessionUser } from './auth/session-user';
-import { refuse } from './forms';
+import { refuse, validateForm } from './forms';
 import type { ServiceResult } from './services/result';
 
 // Loads and actions of the dated reference rows' pages (rate cards, country rules, fees, de
@@ -53,7 +53,7 @@ export function datedRowPages<
 		/** The add action: on success the new row's page. */
 		async add(event: RequestEvent) {
 			const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-			const form = await superValidate(event.request, spec.schema, { id: spec.formId });
+			const form = await validateForm(event.request, spec.schema, { id: spec.formId });
 			if (!form.valid) return fail(400, { form });
 			const result = await spec.save(user, null, form.data, event.getClientAddress());
 			if (!result.ok) return refuse(form, result);
@@ -81,7 +81,7 @@ export function datedRowPages<
 		actions: {
 			save: async (event: RequestEvent) => {
 				const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-				const form = await superValidate(event.request, spec.schema);
+				const form = await validateForm(event.request, spec.schema);
 				if (!form.valid) return fail(400, { form });
 				const id = idOf(event, spec.param);
 				const result = await spec.save(user, id, form.data, event.getClientAddress());
@@ -91,7 +91,7 @@ export function datedRowPages<
 			},
 			retire: async (event: RequestEvent) => {
 				const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-				const form = await superValidate(event.request, zod4(retireSchema), { id: 'retire' });
+				const form = await validateForm(event.request, zod4(retireSchema), { id: 'retire' });
 				if (!form.valid) return fail(400, { form });
 				const { validTo, version } = form.data;
 				const id = idOf(event, spec.param);

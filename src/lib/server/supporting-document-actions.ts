@@ -3,7 +3,7 @@ import { message, setError, superValidate, withFiles } from 'sveltekit-superform
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { supportingRetireSchema, supportingUploadSchema } from '../schemas/supporting-documents';
 import { requireRole, requireUser } from './auth/guard';
-import { refuse } from './forms';
+import { readForm, refuse, validateForm } from './forms';
 import {
 	downloadSupportingDocument,
 	listSupportingDocuments,
@@ -48,8 +48,9 @@ export async function uploadSupportingAction(event: RequestEvent, owner: Documen
 	const user = requireRole(event, 'admin', 'coordinator');
 	const length = Number(event.request.headers.get('content-length') ?? 0);
 	if (length > MAX_UPLOAD_REQUEST_BYTES) return tooLarge();
-	const form = await superValidate(event.request, zod4(supportingUploadSchema), {
-		id: 'supporting-upload'
+	const form = await validateForm(event.request, zod4(supportingUploadSchema), {
+		id: 'supporting-upload',
+		files: ['file']
 	});
 	// Not posted: the body could not be read, i.e. it went past BODY_SIZE_LIMIT while streaming.
 	if (!form.posted) return tooLarge();
@@ -76,7 +77,7 @@ export async function uploadSupportingAction(event: RequestEvent, owner: Documen
 
 export async function retireSupportingAction(event: RequestEvent, owner: DocumentOwner) {
 	const user = requireRole(event, 'admin', 'coordinator');
-	const data = await event.request.formData();
+	const data = await readForm(event.request);
 	const parsed = supportingRetireSchema.safeParse({ documentId: data.get('documentId') ?? '' });
 	if (!parsed.success) return fail(400, { supportingError: 'No such document.' });
 	const result = await retireSupportingDocument(

@@ -3,7 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { canEditMasterData } from '$lib/roles';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { createPlace, listPlaces } from '$lib/server/services/master-data';
 import { placeSchema } from '$lib/schemas/master-data';
@@ -23,7 +23,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(placeSchema));
+		const form = await validateForm(event.request, zod4(placeSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await createPlace(user, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

@@ -5,6 +5,7 @@ import { signIn, SignInRefused } from '$lib/server/auth';
 import { safeRedirectPath } from '$lib/server/redirects';
 import type { Actions, PageServerLoad } from './$types';
 import { signInSchema } from './schema';
+import { validateForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
 	if (locals.user) redirect(303, safeRedirectPath(url.searchParams.get('redirectTo')));
@@ -24,7 +25,7 @@ function minutes(seconds: number): string {
 
 export const actions: Actions = {
 	default: async (event) => {
-		const form = await superValidate(event.request, zod4(signInSchema));
+		const form = await validateForm(event.request, zod4(signInSchema));
 		const password = form.data.password;
 		form.data.password = ''; // never echo a password back to the page
 		if (!form.valid) return message(form, 'Check the highlighted fields.', { status: 400 });

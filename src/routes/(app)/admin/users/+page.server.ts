@@ -7,6 +7,7 @@ import { inviteUser } from '$lib/server/services/invitations';
 import { createUser, listUsers } from '$lib/server/services/users';
 import { createUserSchema, inviteUserSchema } from '$lib/schemas/users';
 import type { Actions, PageServerLoad } from './$types';
+import { validateForm } from '$lib/server/forms';
 
 // Both buttons of the one "Add a person" form answer to the same superform.
 const FORM_ID = 'add-person';
@@ -25,7 +26,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	create: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(createUserSchema), { id: FORM_ID });
+		const form = await validateForm(event.request, zod4(createUserSchema), { id: FORM_ID });
 		if (!form.valid) {
 			form.data.password = '';
 			return fail(400, { form });
@@ -46,7 +47,7 @@ export const actions: Actions = {
 	/** Adds the person without a password and e-mails them a set-password link. */
 	invite: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(inviteUserSchema), { id: FORM_ID });
+		const form = await validateForm(event.request, zod4(inviteUserSchema), { id: FORM_ID });
 		if (!form.valid) return fail(400, { form });
 		const result = await inviteUser(admin, form.data, {
 			origin: event.url.origin,

@@ -3,7 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { canEditMasterData } from '$lib/roles';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { lifecycleActions } from '$lib/server/master-record-actions';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { getParty, saveParty } from '$lib/server/services/master-data';
@@ -41,7 +41,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(partySchema));
+		const form = await validateForm(event.request, zod4(partySchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await saveParty(user, event.params.partyId, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

@@ -3,7 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { canEditMasterData } from '$lib/roles';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { lifecycleActions } from '$lib/server/master-record-actions';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { getPlace, savePlace } from '$lib/server/services/master-data';
@@ -27,7 +27,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(placeSchema));
+		const form = await validateForm(event.request, zod4(placeSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await savePlace(user, event.params.placeId, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

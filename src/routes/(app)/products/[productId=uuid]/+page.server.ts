@@ -2,7 +2,7 @@ import { error, fail } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import {
 	retireSupportingAction,
 	supportingDocumentsData,
@@ -38,7 +38,7 @@ export const actions: Actions = {
 	retireSupporting: (event) => retireSupportingAction(event, { productId: event.params.productId }),
 	save: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(productSchema));
+		const form = await validateForm(event.request, zod4(productSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await saveProduct(
 			user,

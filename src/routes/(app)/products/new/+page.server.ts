@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { saveProduct } from '$lib/server/services/products';
 import { productSchema } from '$lib/schemas/products';
@@ -22,7 +22,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(productSchema));
+		const form = await validateForm(event.request, zod4(productSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await saveProduct(user, null, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

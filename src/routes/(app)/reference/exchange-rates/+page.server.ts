@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { REFERENCE_DATA_EDITORS, REFERENCE_DATA_READERS, canEditReferenceData } from '$lib/roles';
 import { exchangeRateImportSchema, exchangeRateSchema } from '$lib/schemas/reference-data';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import {
 	LIST_LIMIT,
@@ -41,7 +41,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	add: async (event) => {
 		const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-		const form = await superValidate(event.request, zod4(exchangeRateSchema), { id: 'fx-add' });
+		const form = await validateForm(event.request, zod4(exchangeRateSchema), { id: 'fx-add' });
 		if (!form.valid) return fail(400, { form });
 		const result = await addExchangeRate(user, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);
@@ -50,7 +50,7 @@ export const actions: Actions = {
 	},
 	import: async (event) => {
 		const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-		const form = await superValidate(event.request, zod4(exchangeRateImportSchema), {
+		const form = await validateForm(event.request, zod4(exchangeRateImportSchema), {
 			id: 'fx-import'
 		});
 		if (!form.valid) {

@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { REFERENCE_DATA_EDITORS, REFERENCE_DATA_READERS, canEditReferenceData } from '$lib/roles';
 import { settingsSchema } from '$lib/schemas/landed-cost-settings';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import {
 	getSettings,
@@ -36,7 +36,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-		const form = await superValidate(event.request, zod4(settingsSchema));
+		const form = await validateForm(event.request, zod4(settingsSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await saveSettings(user, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

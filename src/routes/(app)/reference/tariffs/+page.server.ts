@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { REFERENCE_DATA_EDITORS, REFERENCE_DATA_READERS, canEditReferenceData } from '$lib/roles';
 import { tariffSchema } from '$lib/schemas/reference-data';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import {
 	listTariffs,
@@ -32,7 +32,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...REFERENCE_DATA_EDITORS);
-		const form = await superValidate(event.request, zod4(tariffSchema));
+		const form = await validateForm(event.request, zod4(tariffSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await saveTariff(user, null, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

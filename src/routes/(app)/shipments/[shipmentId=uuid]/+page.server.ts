@@ -2,7 +2,8 @@ import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole, requireUser } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { readForm, refuse, validateForm } from '$lib/server/forms';
+import { NUL_MESSAGE, nulPaths } from '$lib/schemas/nul-text';
 import {
 	retireSupportingAction,
 	supportingDocumentsData,
@@ -229,7 +230,7 @@ const editor = (event: RequestEvent) => requireRole(event, 'admin', 'coordinator
 
 /** The deposit a cancel, refund or pay button names, or a 400 saying it is not one. */
 async function depositAction(event: RequestEvent) {
-	const data = await event.request.formData();
+	const data = await readForm(event.request);
 	const parsed = depositActionSchema.safeParse({
 		depositId: data.get('depositId') ?? '',
 		version: data.get('version') ?? undefined
@@ -258,7 +259,7 @@ export const actions: Actions = {
 		retireSupportingAction(event, { shipmentId: event.params.shipmentId }),
 	header: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(shipmentSchema), { id: 'header' });
+		const form = await validateForm(event.request, zod4(shipmentSchema), { id: 'header' });
 		if (!form.valid) return fail(400, { form });
 		const result = await updateShipment(
 			user,
@@ -271,7 +272,7 @@ export const actions: Actions = {
 	},
 	papers: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(paperDetailsSchema), { id: 'papers' });
+		const form = await validateForm(event.request, zod4(paperDetailsSchema), { id: 'papers' });
 		if (!form.valid) return fail(400, { form });
 		const result = await updatePaperDetails(
 			user,
@@ -284,7 +285,7 @@ export const actions: Actions = {
 	},
 	issuePapers: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(issuePapersSchema), { id: 'issue' });
+		const form = await validateForm(event.request, zod4(issuePapersSchema), { id: 'issue' });
 		if (!form.valid) return fail(400, { form });
 		const result = await issuePapers(
 			user,
@@ -303,7 +304,7 @@ export const actions: Actions = {
 	},
 	lines: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(shipmentLinesSchema), { id: 'lines' });
+		const form = await validateForm(event.request, zod4(shipmentLinesSchema), { id: 'lines' });
 		if (!form.valid) return fail(400, { form });
 		const result = await replaceLines(
 			user,
@@ -316,7 +317,7 @@ export const actions: Actions = {
 	},
 	status: async (event) => {
 		const user = editor(event);
-		const data = await event.request.formData();
+		const data = await readForm(event.request);
 		const parsed = statusChangeSchema.safeParse({
 			to: data.get('to'),
 			note: data.get('note') ?? '',
@@ -324,6 +325,7 @@ export const actions: Actions = {
 		});
 		if (!parsed.success)
 			return fail(400, { statusError: 'Choose one of the offered status changes.' });
+		if (nulPaths(parsed.data.note).length) return fail(400, { statusError: NUL_MESSAGE });
 		const result = await changeStatus(
 			user,
 			event.params.shipmentId,
@@ -335,7 +337,7 @@ export const actions: Actions = {
 	},
 	addContainer: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(containerSchema), { id: 'container' });
+		const form = await validateForm(event.request, zod4(containerSchema), { id: 'container' });
 		if (!form.valid) return fail(400, { form });
 		const result = await addContainer(
 			user,
@@ -348,7 +350,7 @@ export const actions: Actions = {
 	},
 	removeContainer: async (event) => {
 		const user = editor(event);
-		const data = await event.request.formData();
+		const data = await readForm(event.request);
 		const containerId = String(data.get('containerId') ?? '');
 		const version = Number(data.get('version'));
 		if (!/^[0-9a-f-]{36}$/i.test(containerId) || !Number.isInteger(version)) {
@@ -366,7 +368,7 @@ export const actions: Actions = {
 	},
 	addLot: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(lotSchema), { id: 'lot' });
+		const form = await validateForm(event.request, zod4(lotSchema), { id: 'lot' });
 		if (!form.valid) return fail(400, { form });
 		const result = await addLot(user, event.params.shipmentId, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);
@@ -374,7 +376,7 @@ export const actions: Actions = {
 	},
 	importLots: async (event) => {
 		const user = editor(event);
-		const form = await superValidate(event.request, zod4(lotImportSchema), { id: 'lot-import' });
+		const form = await validateForm(event.request, zod4(lotImportSchema), { id: 'lot-import' });
 		if (!form.valid) {
 			return message(
 				form,
@@ -395,7 +397,7 @@ export const actions: Actions = {
 	},
 	requestDeposit: async (event) => {
 		const user = requireRole(event, ...DEPOSIT_REQUESTERS);
-		const form = await superValidate(event.request, zod4(depositRequestSchema), { id: 'deposit' });
+		const form = await validateForm(event.request, zod4(depositRequestSchema), { id: 'deposit' });
 		if (!form.valid) return fail(400, { form });
 		const result = await requestDeposit(user, event.params.shipmentId, form.data, {
 			origin: event.url.origin,
@@ -431,7 +433,7 @@ export const actions: Actions = {
 	},
 	removeLot: async (event) => {
 		const user = editor(event);
-		const lotId = String((await event.request.formData()).get('lotId') ?? '');
+		const lotId = String((await readForm(event.request)).get('lotId') ?? '');
 		if (!/^[0-9a-f-]{36}$/i.test(lotId))
 			return fail(400, { lotError: 'That lot could not be identified.' });
 		const result = await removeLot(user, event.params.shipmentId, lotId, event.getClientAddress());

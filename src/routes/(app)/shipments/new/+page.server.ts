@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guard';
-import { refuse } from '$lib/server/forms';
+import { refuse, validateForm } from '$lib/server/forms';
 import { countryAndCurrencyOptions } from '$lib/server/services/form-options';
 import { shipmentFormOptions } from '$lib/server/services/shipment-options';
 import { createShipment } from '$lib/server/services/shipments';
@@ -28,7 +28,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator');
-		const form = await superValidate(event.request, zod4(shipmentSchema));
+		const form = await validateForm(event.request, zod4(shipmentSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await createShipment(user, form.data, event.getClientAddress());
 		if (!result.ok) return refuse(form, result);

@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { acceptInvitation, pendingInvitation } from '$lib/server/services/invitations';
 import { setPasswordSchema } from '$lib/schemas/users';
 import type { Actions, PageServerLoad } from './$types';
+import { validateForm } from '$lib/server/forms';
 
 // Public: the token in the path is the proof. Returns: invitee (name, e-mail) or null, form.
 export const load: PageServerLoad = async ({ params }) => {
@@ -16,7 +17,7 @@ export const load: PageServerLoad = async ({ params }) => {
 
 export const actions: Actions = {
 	default: async (event) => {
-		const form = await superValidate(event.request, zod4(setPasswordSchema));
+		const form = await validateForm(event.request, zod4(setPasswordSchema));
 		const password = form.data.password;
 		form.data.password = '';
 		form.data.confirm = '';

@@ -7,6 +7,8 @@ import { reinviteUser } from '$lib/server/services/invitations';
 import { getUser, updateUser } from '$lib/server/services/users';
 import { updateUserSchema } from '$lib/schemas/users';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm, validateForm } from '$lib/server/forms';
+import { NUL_MESSAGE } from '$lib/schemas/nul-text';
 
 // Returns: person (the user being edited), form (name, role, disabled, version), tokens (API).
 export const load: PageServerLoad = async (event) => {
@@ -23,7 +25,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(updateUserSchema));
+		const form = await validateForm(event.request, zod4(updateUserSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await updateUser(
 			admin,
@@ -43,17 +45,18 @@ export const actions: Actions = {
 	},
 	issueToken: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const name = String((await event.request.formData()).get('name') ?? '').trim();
+		const name = String((await readForm(event.request)).get('name') ?? '').trim();
 		if (name.length < 1 || name.length > 80) {
 			return fail(400, { tokenError: 'Name the token (1 to 80 characters), e.g. “ERP export”.' });
 		}
+		if (name.includes('\u0000')) return fail(400, { tokenError: NUL_MESSAGE });
 		const result = await issueToken(admin, event.params.userId, name, event.getClientAddress());
 		if (!result.ok) return fail(result.status, { tokenError: result.message });
 		return { issued: { name, token: result.value.token } };
 	},
 	revokeToken: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const tokenId = String((await event.request.formData()).get('tokenId') ?? '');
+		const tokenId = String((await readForm(event.request)).get('tokenId') ?? '');
 		if (!/^[0-9a-f-]{36}$/i.test(tokenId)) return fail(400, { tokenError: 'No such token.' });
 		const result = await revokeToken(admin, event.params.userId, tokenId, event.getClientAddress());
 		if (!result.ok) return fail(result.status, { tokenError: result.message });

@@ -1,5 +1,7 @@
 import { error, fail } from '@sveltejs/kit';
 import { saveScenarioSchema } from '$lib/schemas/landed-cost';
+import { readForm } from '$lib/server/forms';
+import { NUL_MESSAGE, nulPaths } from '$lib/schemas/nul-text';
 import { listScenarios, saveScenario } from '$lib/server/services/landed-cost/scenarios';
 import { requireRole } from '$lib/server/auth/guard';
 import { landedCostSettings } from '$lib/server/services/landed-cost/reference';
@@ -43,7 +45,7 @@ export const actions: Actions = {
 	// Freezes the comparison as it stands: each mode's engine input (with its data rows) and result.
 	saveScenario: async (event) => {
 		const user = requireRole(event, 'admin', 'coordinator', 'finance');
-		const data = await event.request.formData();
+		const data = await readForm(event.request);
 		const parsed = saveScenarioSchema.safeParse({
 			name: data.get('name') ?? '',
 			modes: data.getAll('modes'),
@@ -56,6 +58,7 @@ export const actions: Actions = {
 			return fail(400, {
 				scenarioError: parsed.error.issues.map((i) => i.message).join(' ')
 			});
+		if (nulPaths(parsed.data.name).length) return fail(400, { scenarioError: NUL_MESSAGE });
 		const { name, modes, ...options } = parsed.data;
 		const result = await saveScenario(
 			user,
