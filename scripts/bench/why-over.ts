@@ -31,7 +31,11 @@ export const WHY_OVER: Record<string, string> = {
 	'load-plan': 'the planner input is kept per stamp; the stored plan is one row read. ' + SHARED,
 	landed: 'kept per shipment stamp, one small query a request. ' + SHARED,
 	'calc-landed':
-		'parses, validates and computes 50 lines on every request (nothing kept). ' + SHARED,
+		'computes on every request (nothing is kept): in the profile the engine itself (decimal ' +
+		'arithmetic, largest-remainder shares per line) took about a quarter of the app’s time, ' +
+		'reading, validating and writing the JSON (9 kB in, 39 kB out) about as much. Idle, it ' +
+		'runs at 350–420 requests/s with p95 65–90 ms. ' +
+		SHARED,
 	document: 'one stored PDF read and one download logged (an insert) per request. ' + SHARED,
 	noop: SHARED,
 	'noop-end': SHARED
