@@ -46,11 +46,7 @@ cleanup() {
 	if ((code != 0)); then echo "npm run bench stopped early (exit $code); see the messages above." >&2; fi
 	exit "$code"
 }
-trap cleanup EXIT
-trap 'exit 130' INT TERM
-
-[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
-TSX=node_modules/.bin/tsx
+bench_prepare
 START=$SECONDS
 # Other work on the machine inflates every figure: the report warns when the load was high.
 BENCH_LOAD_BEFORE=$(cut -d' ' -f1-3 /proc/loadavg)

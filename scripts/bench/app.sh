@@ -5,6 +5,15 @@
 APP_PID=""
 CLUSTER_STARTED=0
 
+# The traps (the caller defines cleanup, which should call bench_stop) and the tools every
+# benchmark needs; sets TSX.
+bench_prepare() {
+	trap cleanup EXIT
+	trap 'exit 130' INT TERM
+	[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
+	TSX=node_modules/.bin/tsx
+}
+
 # Stops what bench_start_app and bench_fresh_cluster started (for the EXIT trap).
 bench_stop() {
 	if [[ -n $APP_PID ]] && kill -0 "$APP_PID" 2>/dev/null; then

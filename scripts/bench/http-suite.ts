@@ -10,7 +10,7 @@ import { benchBase, run, signIn } from './http';
 import { LANDED_CARDS, landedBenchInput } from './landed-input';
 import { calcLoadPlanBody } from './load-plan-input';
 import { readMemory, sampleRss } from './proc-memory';
-import { ms } from './stats';
+import { envNumber, ms } from './stats';
 import { judge, type RunKind, type SuiteResults, type SuiteRun } from './suite-results';
 
 const base = benchBase('http://127.0.0.1:4397');
@@ -20,8 +20,8 @@ const cedarId = process.env.BENCH_CEDAR_ID ?? '';
 const out = process.env.BENCH_OUT ?? '';
 const EMAIL = process.env.BENCH_EMAIL ?? 'coordinator@solvrae.example';
 const PASSWORD = process.env.BENCH_PASSWORD ?? 'Landfall-demo-2026';
-const DURATION_S = Math.min(Math.max(Number(process.env.BENCH_DURATION ?? 10) || 10, 1), 60);
-const CONNECTIONS = Math.min(Math.max(Number(process.env.BENCH_CONNECTIONS ?? 20) || 20, 1), 100);
+const DURATION_S = envNumber('BENCH_DURATION', 10, 1, 60);
+const CONNECTIONS = envNumber('BENCH_CONNECTIONS', 20, 1, 100);
 /** Lines of the stateless landed-cost request (the in-process bench does 500). */
 const CALC_LANDED_LINES = 50;
 
