@@ -6,6 +6,7 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
+import * as prettier from 'prettier';
 import { ms } from './stats';
 import { TARGETS, type SuiteResults, type SuiteRun } from './suite-results';
 import { WHY_OVER } from './why-over';
@@ -191,11 +192,17 @@ const md = [
 	''
 ];
 
+// Written as the project's Prettier would, so `npm run lint` accepts the committed files.
+async function write(file: string, text: string, parser: 'markdown' | 'json') {
+	const options = (await prettier.resolveConfig(file)) ?? {};
+	writeFileSync(file, await prettier.format(text, { ...options, parser }));
+}
 mkdirSync(outDir, { recursive: true });
-writeFileSync(join(outDir, 'bench-results.md'), `${md.join('\n')}\n`);
-writeFileSync(
+await write(join(outDir, 'bench-results.md'), md.join('\n'), 'markdown');
+await write(
 	join(outDir, 'bench-results.json'),
-	`${JSON.stringify({ machine: facts, http: suite, benchmarks: tsv }, null, '\t')}\n`
+	JSON.stringify({ machine: facts, http: suite, benchmarks: tsv }),
+	'json'
 );
 console.log(`Wrote ${join(outDir, 'bench-results.md')} and bench-results.json`);
 if (busy) console.error('WARNING: the machine was busy before the run; figures are inflated.');
