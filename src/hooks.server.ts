@@ -18,7 +18,8 @@ import { userForToken } from '$lib/server/services/api-tokens';
 
 /** Pages and endpoints anyone may reach. Everything else needs a session. */
 // The Stripe webhook proves itself with its signature (checked in the route) instead.
-const PUBLIC_PATHS = new Set(['/signin', '/api/health', '/api/v1/stripe/webhook']);
+// /api/ping is the benchmarks' no-op (no database, no session).
+const PUBLIC_PATHS = new Set(['/signin', '/api/health', '/api/ping', '/api/v1/stripe/webhook']);
 
 export const init: ServerInit = async () => {
 	// Fail at start-up, not on the first request, when the database is unreachable or misconfigured.

@@ -5,6 +5,15 @@
 APP_PID=""
 CLUSTER_STARTED=0
 
+# The traps (the caller defines cleanup, which should call bench_stop) and the tools every
+# benchmark needs; sets TSX.
+bench_prepare() {
+	trap cleanup EXIT
+	trap 'exit 130' INT TERM
+	[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
+	TSX=node_modules/.bin/tsx
+}
+
 # Stops what bench_start_app and bench_fresh_cluster started (for the EXIT trap).
 bench_stop() {
 	if [[ -n $APP_PID ]] && kill -0 "$APP_PID" 2>/dev/null; then
@@ -44,8 +53,9 @@ bench_start_app() {
 		node_modules/.bin/vite build --logLevel error
 	fi
 	say "Starting node build on $BASE"
+	# MAIL_DISPATCH=off: the demo's queued mail stays queued, never sent to anyone's catcher.
 	# shellcheck disable=SC2086 # the extra flags are words
-	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL \
+	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL MAIL_DISPATCH=off \
 		AUTH_SECRET=bench-secret-0123456789abcdefghij NODE_ENV=production \
 		node ${1:-} build >"$WORK/app.log" 2>&1 &
 	APP_PID=$!

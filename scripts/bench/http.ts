@@ -47,6 +47,8 @@ export interface RunFigures extends Summary {
 	requestsPerSecond: number;
 	non2xx: number;
 	errors: number;
+	/** Responses per HTTP status, e.g. { "200": 1990, "503": 10 }. */
+	statuses: Record<string, number>;
 }
 
 const MAX_REQUESTS = 20_000; // hard cap per run, whatever the duration
@@ -86,6 +88,7 @@ export async function run(base: string, { name, options }: Run): Promise<RunFigu
 		...s,
 		requestsPerSecond,
 		non2xx: result.non2xx,
-		errors: result.errors + result.timeouts
+		errors: result.errors + result.timeouts,
+		statuses: Object.fromEntries([...statuses].map(([code, n]) => [String(code), n]))
 	};
 }

@@ -7,15 +7,15 @@
 // Env: BENCH_DURATION (s per run, default 10), BENCH_CONNECTIONS (default 10), BENCH_MODE
 //      (default sea_lcl), BENCH_EMAIL / BENCH_PASSWORD (a finance user of the demo).
 import { benchBase, run, signIn, type RunFigures } from './http';
-import { ms } from './stats';
+import { envNumber, ms } from './stats';
 
 const base = benchBase('http://127.0.0.1:4393');
 const shipmentId = process.env.BENCH_SHIPMENT_ID ?? '';
 const EMAIL = process.env.BENCH_EMAIL ?? 'finance@solvrae.example';
 const PASSWORD = process.env.BENCH_PASSWORD ?? 'Landfall-demo-2026';
 const MODE = process.env.BENCH_MODE ?? 'sea_lcl';
-const DURATION_S = Math.min(Math.max(Number(process.env.BENCH_DURATION ?? 10) || 10, 1), 30);
-const CONNECTIONS = Math.min(Math.max(Number(process.env.BENCH_CONNECTIONS ?? 10) || 10, 1), 50);
+const DURATION_S = envNumber('BENCH_DURATION', 10, 1, 30);
+const CONNECTIONS = envNumber('BENCH_CONNECTIONS', 10, 1, 50);
 
 if (!/^[0-9a-f-]{36}$/.test(shipmentId)) {
 	console.error('BENCH_SHIPMENT_ID must be the demo Hallvik shipment’s id (a uuid).');

@@ -41,11 +41,7 @@ cleanup() {
 	if ((code != 0)); then echo "bench:landed stopped early (exit $code); see the messages above." >&2; fi
 	exit 0
 }
-trap cleanup EXIT
-trap 'exit 130' INT TERM
-
-[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
-TSX=node_modules/.bin/tsx
+bench_prepare
 echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg) on $(nproc) CPUs"
 
 if [[ $PARTS != b ]]; then

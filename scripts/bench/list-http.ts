@@ -3,12 +3,12 @@
 // Latencies per response and exact p95: see http.ts.
 import { benchInput } from './measure-input';
 import { benchBase, run as runAt, signIn, type Run } from './http';
-import { recordResult } from './stats';
+import { envNumber, recordResult } from './stats';
 
 const base = benchBase('http://127.0.0.1:4395');
 const EMAIL = process.env.BENCH_EMAIL ?? 'coordinator@solvrae.example';
 const PASSWORD = process.env.BENCH_PASSWORD ?? 'Landfall-demo-2026';
-const DURATION_S = Math.min(Math.max(Number(process.env.BENCH_DURATION ?? 10) || 10, 1), 30);
+const DURATION_S = envNumber('BENCH_DURATION', 10, 1, 30);
 const LIST_TARGET_MS = 150;
 const MEASURE_TARGET_MS = 20;
 

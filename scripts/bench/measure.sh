@@ -39,11 +39,7 @@ cleanup() {
 	rm -rf -- "$WORK"
 	exit "$code"
 }
-trap cleanup EXIT
-trap 'exit 130' INT TERM
-
-[[ -x node_modules/.bin/tsx && -d node_modules/autocannon ]] || ensure_node_modules
-TSX=node_modules/.bin/tsx
+bench_prepare
 START=$SECONDS
 # Figures are only worth comparing on an otherwise idle machine: say so when it is not.
 # After the run the load is mostly our own, so only the "before" figure warns.

@@ -31,6 +31,12 @@ export function summarize(samples: readonly number[]): Summary {
 	};
 }
 
+/** A whole number from the environment, within [min, max]; the fallback when unset or not one. */
+export function envNumber(name: string, fallback: number, min: number, max: number): number {
+	const n = Number(process.env[name] ?? fallback) || fallback;
+	return Math.min(Math.max(n, min), max);
+}
+
 export const ms = (x: number) => (Number.isFinite(x) ? `${x.toFixed(2)} ms` : 'n/a');
 
 /**

@@ -622,6 +622,8 @@ export const ROUTES: Record<string, { page?: Probe[]; actions?: Probe[]; api?: P
 		]
 	},
 	'/api/health': { api: [{ method: 'GET', path: '/api/health', expect: { default: 200 } }] },
+	// The benchmarks' no-op: public, no database, no session, an empty 204.
+	'/api/ping': { api: [{ method: 'GET', path: '/api/ping', expect: { default: 204 } }] },
 	'/api/v1/me': { api: [{ method: 'GET', path: '/api/v1/me', expect: API_200 }] },
 	'/api/v1/organizations': {
 		api: [{ method: 'GET', path: '/api/v1/organizations', expect: API_200 }]

@@ -5,10 +5,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { validatePlan } from '$lib/load-plan';
 import type { SessionUser } from '$lib/server/auth/session-user';
 import { Place, Product, Shipment, ShipmentLoadPlan } from '$lib/server/db/models';
-import { shipmentLoadPlan, type LoadPlanOutcome } from '$lib/server/services/load-plan';
+import {
+	prepareLoadPlan,
+	shipmentLoadPlan,
+	type LoadPlanOutcome
+} from '$lib/server/services/load-plan';
+import { keptShipmentMeasure } from '$lib/server/services/shipment-measure';
 import { createShipment, replaceLines } from '$lib/server/services/shipments';
 import { shipmentSchema } from '$lib/schemas/shipments';
-import { countRows, demoOrganization, sessionUserFor } from './db';
+import { countRows, demoOrganization, sequelize, sessionUserFor } from './db';
 
 let coordinator: SessionUser;
 let hallvikBuyer: SessionUser;
@@ -138,5 +143,35 @@ describe('shipmentLoadPlan', () => {
 		]);
 		expect(plan(a).plan).toEqual(plan(b).plan);
 		expect(plan(a).computedAt).toBe(plan(b).computedAt);
+	});
+});
+
+describe('measure and planner input kept per stamp (kept-results.ts)', () => {
+	it('are reused while nothing changes, and made afresh when the data or the shipment does', async () => {
+		const measure = await keptShipmentMeasure(coordinator, shipmentId);
+		const prepared = await prepareLoadPlan(coordinator, shipmentId);
+		expect(await keptShipmentMeasure(coordinator, shipmentId)).toEqual(measure);
+		expect((await keptShipmentMeasure(coordinator, shipmentId))?.measure).toBe(measure?.measure);
+		expect(await prepareLoadPlan(coordinator, shipmentId)).toBe(prepared);
+		// A write to a container type moves the data generation (migration 016), even one that
+		// changes nothing: both are made afresh, with the same content.
+		await sequelize.query(`UPDATE container_types SET name = name WHERE code = 'C20GP'`);
+		const afterData = await prepareLoadPlan(coordinator, shipmentId);
+		expect(afterData).not.toBe(prepared);
+		expect(afterData).toEqual(prepared);
+		const measureAfterData = await keptShipmentMeasure(coordinator, shipmentId);
+		expect(measureAfterData?.measure).not.toBe(measure?.measure);
+		expect(measureAfterData?.measure).toEqual(measure?.measure);
+		// A new revision of the shipment: its lines are measured again.
+		await setLines([['SLV-PBL-20', 240]]);
+		const afterEdit = await keptShipmentMeasure(coordinator, shipmentId);
+		expect(afterEdit?.measure.shipment.version).toBeGreaterThan(measure!.measure.shipment.version);
+		expect(afterEdit?.measure.input.lines.map((l) => l.quantity)).toEqual([240]);
+	});
+
+	it('are handed only to those who may see the shipment', async () => {
+		expect(await keptShipmentMeasure(coordinator, shipmentId)).not.toBeNull();
+		expect(await keptShipmentMeasure(wattlebirdBuyer, shipmentId)).toBeNull();
+		expect(await prepareLoadPlan(wattlebirdBuyer, shipmentId)).toMatchObject({ status: 404 });
 	});
 });

@@ -1,7 +1,8 @@
 /**
  * The load planner's worker thread. This module is loaded twice: in the main thread only for
- * WORKER_URL (its own file, wherever the build put it), and as the worker itself, where it runs
- * planLoad once on the input in workerData and posts progress and the result back.
+ * WORKER_URL (its own file, wherever the build put it), and as the worker itself, where it plans
+ * each job the runner posts, one at a time, and posts progress and the result back. The worker
+ * stays up between jobs, so later jobs skip the start-up and run on warm (JIT-compiled) code.
  */
 import { isMainThread, parentPort, workerData } from 'node:worker_threads';
 import { planLoad, type LoadPlanInput, type LoadPlanProgress } from '../../load-plan';
@@ -9,6 +10,7 @@ import { planLoad, type LoadPlanInput, type LoadPlanProgress } from '../../load-
 export const WORKER_URL = import.meta.url;
 export const JOB_TAG = 'landfall-load-plan';
 
+export type WorkerJob = { type: 'job'; input: LoadPlanInput };
 export type WorkerMessage =
 	| { type: 'progress'; progress: LoadPlanProgress }
 	| { type: 'result'; result: ReturnType<typeof planLoad> };
@@ -18,18 +20,19 @@ const PROGRESS_EVERY_MS = 150;
 
 if (!isMainThread && parentPort && workerData?.tag === JOB_TAG) {
 	const port = parentPort;
-	const input = workerData.input as LoadPlanInput;
-	let last = -Infinity;
-	const result = planLoad({
-		...input,
-		options: {
-			...input.options,
-			onProgress: (progress) => {
-				if (progress.elapsedMs - last < PROGRESS_EVERY_MS) return;
-				last = progress.elapsedMs;
-				port.postMessage({ type: 'progress', progress } satisfies WorkerMessage);
+	port.on('message', ({ input }: WorkerJob) => {
+		let last = -Infinity;
+		const result = planLoad({
+			...input,
+			options: {
+				...input.options,
+				onProgress: (progress) => {
+					if (progress.elapsedMs - last < PROGRESS_EVERY_MS) return;
+					last = progress.elapsedMs;
+					port.postMessage({ type: 'progress', progress } satisfies WorkerMessage);
+				}
 			}
-		}
+		});
+		port.postMessage({ type: 'result', result } satisfies WorkerMessage);
 	});
-	port.postMessage({ type: 'result', result } satisfies WorkerMessage);
 }

@@ -1,7 +1,8 @@
 /**
  * The load plan of a stored shipment: its measured cartons (or pallets) and every container type,
  * planned in a worker thread and cached per shipment revision and planner input. Scoped like the
- * shipment itself (shipment-measure.ts → getShipment).
+ * shipment itself (the stamp query of kept-results.ts). The planner input is kept in memory per
+ * stamp, so a GET of a stored plan costs two small queries.
  */
 import { createHash } from 'node:crypto';
 import {
@@ -19,7 +20,8 @@ import type { Problem } from '../../packing';
 import type { SessionUser } from '../auth/session-user';
 import { ContainerTypeRow, ShipmentLoadPlan } from '../db/models';
 import { runLoadPlan } from '../load-plan/runner';
-import { measureShipment } from './shipment-measure';
+import { KeptResults } from './kept-results';
+import { keptShipmentMeasure, type ShipmentMeasure } from './shipment-measure';
 
 /** Bump when the stored plan's meaning changes, so older rows are computed afresh. */
 const CACHE_FORMAT = 1;
@@ -51,15 +53,30 @@ export interface Prepared {
 	view: Omit<ShipmentLoadPlanView, 'computedAt' | 'cached' | 'plan'>;
 }
 
+/** Prepared inputs of the shipments being looked at, per stamp. */
+const keptPrepared = new KeptResults<Prepared>(100);
+
 /** The shipment's planner input and cache key, or why it cannot be planned (404, 409). */
 export async function prepareLoadPlan(
 	user: SessionUser,
 	id: string
 ): Promise<Prepared | LoadPlanRefusal> {
-	const measured = await measureShipment(user, id);
-	if (!measured) return refusal(404, 'not_found', 'No shipment with this id is visible to you.');
-	const { shipment, input: measureInput, result } = measured;
-	if (shipment.lines.length === 0) {
+	const kept = await keptShipmentMeasure(user, id);
+	if (!kept) return refusal(404, 'not_found', 'No shipment with this id is visible to you.');
+	const hit = keptPrepared.get(id, kept.stamp);
+	if (hit) return hit;
+	const prepared = await prepare(kept.measure);
+	// Refusals are not kept: they are cheap, and say what to fix.
+	if (!('ok' in prepared)) keptPrepared.keep(id, kept.stamp, prepared);
+	return prepared;
+}
+
+async function prepare({
+	shipment,
+	input: measureInput,
+	result
+}: ShipmentMeasure): Promise<Prepared | LoadPlanRefusal> {
+	if (shipment.lineCount === 0) {
 		return refusal(409, 'no_lines', 'Add lines to the shipment before planning its load.');
 	}
 	if (!result.ok) {

@@ -62,8 +62,11 @@ export async function listShipments(user: SessionUser, query: ShipmentListQuery)
 	const where = conditions.join(' AND ');
 	const direction = query.dir === 'asc' ? 'ASC' : 'DESC';
 	const sequelize = Shipment.sequelize!;
-	const rowsQuery = sequelize.query<ShipmentListRow & { createdAt: Date }>(
-		`SELECT s.id, s.reference, s.status, c.name AS "customerName", o.code AS "originCode",
+	// The total rides along with the page as an uncorrelated subquery (computed once): one round
+	// trip instead of two, which showed in the list benchmark at 20 connections.
+	const rows = await sequelize.query<ShipmentListRow & { createdAt: Date; total: number }>(
+		`SELECT (SELECT count(*)::int FROM shipments s WHERE ${where}) AS total,
+		        s.id, s.reference, s.status, c.name AS "customerName", o.code AS "originCode",
 		        d.code AS "destinationCode", s.chosen_mode AS "chosenMode",
 		        s.modes_considered AS "modesConsidered", s.incoterm, s.etd, s.eta,
 		        (SELECT count(*)::int FROM shipment_lines l WHERE l.shipment_id = s.id) AS "lineCount",
@@ -84,14 +87,21 @@ export async function listShipments(user: SessionUser, query: ShipmentListQuery)
 			}
 		}
 	);
-	const countQuery = sequelize.query<{ total: number }>(
-		`SELECT count(*)::int AS total FROM shipments s WHERE ${where}`,
-		{ type: QueryTypes.SELECT, replacements }
-	);
-	const [rows, [count]] = await Promise.all([rowsQuery, countQuery]);
+	// A page past the end has no row to carry the total: count on its own then.
+	let total = rows[0]?.total ?? 0;
+	if (rows.length === 0 && query.page > 1) {
+		const [count] = await sequelize.query<{ total: number }>(
+			`SELECT count(*)::int AS total FROM shipments s WHERE ${where}`,
+			{ type: QueryTypes.SELECT, replacements }
+		);
+		total = count?.total ?? 0;
+	}
 	return {
-		rows: rows.map((r) => ({ ...r, createdAt: new Date(r.createdAt).toISOString() })),
-		total: count?.total ?? 0,
+		rows: rows.map(({ total: _, ...r }) => ({
+			...r,
+			createdAt: new Date(r.createdAt).toISOString()
+		})),
+		total,
 		page: query.page,
 		pageSize: query.pageSize
 	};
