@@ -107,6 +107,9 @@ bench_stop
 APP_PID=""
 CLUSTER_STARTED=0
 
+# Services failing under load (its own cluster, app and catcher; PASS/FAIL lines in the report).
+part faults bash scripts/bench/faults.sh || echo "bench:faults: a check failed (see above)." >&2
+
 # --- 3. The results file ---------------------------------------------------------------------
 say "Results ($((SECONDS - START)) s)"
 BENCH_WORK=$WORK BENCH_ELAPSED_S=$((SECONDS - START)) "$TSX" scripts/bench/report.ts "$RESULTS_DIR"

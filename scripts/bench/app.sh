@@ -53,9 +53,10 @@ bench_start_app() {
 		node_modules/.bin/vite build --logLevel error
 	fi
 	say "Starting node build on $BASE"
-	# MAIL_DISPATCH=off: the demo's queued mail stays queued, never sent to anyone's catcher.
+	# MAIL_DISPATCH=off: the demo's queued mail stays queued, never sent to anyone's catcher
+	# (bench:faults sets BENCH_MAIL_DISPATCH=on: its own catcher is the point).
 	# shellcheck disable=SC2086 # the extra flags are words
-	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL MAIL_DISPATCH=off \
+	PORT=$APP_PORT HOST=$APP_HOST ORIGIN=$BASE DATABASE_URL=$DATABASE_URL MAIL_DISPATCH=${BENCH_MAIL_DISPATCH:-off} \
 		AUTH_SECRET=bench-secret-0123456789abcdefghij NODE_ENV=production \
 		node ${1:-} build >"$WORK/app.log" 2>&1 &
 	APP_PID=$!

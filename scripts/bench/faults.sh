@@ -21,7 +21,7 @@ WORK=$(mktemp -d "${TMPDIR:-/tmp}/landfall-bench-faults.XXXXXX")
 export MAIL_CATCHER_SMTP_PORT=12701 MAIL_CATCHER_WEB_PORT=12702
 export MAIL_CATCHER_FILE=$WORK/caught.json
 export SMTP_HOST=127.0.0.1 SMTP_PORT=$MAIL_CATCHER_SMTP_PORT SMTP_SECURE=false
-export MAIL_POLL_MS=200 MAIL_RETRY_BASE_MS=500
+export MAIL_POLL_MS=200 MAIL_RETRY_BASE_MS=500 BENCH_MAIL_DISPATCH=on
 # shellcheck source=scripts/bench/app.sh
 source scripts/bench/app.sh
 
@@ -31,11 +31,7 @@ cleanup() {
 	rm -rf -- "$WORK"
 	exit "$code"
 }
-trap cleanup EXIT
-trap 'exit 130' INT TERM
-
-[[ -x node_modules/.bin/tsx ]] || ensure_node_modules
-TSX=node_modules/.bin/tsx
+bench_prepare
 if bench_port_in_use; then
 	echo "port $APP_PORT on $APP_HOST is in use; stop what listens there first" >&2
 	exit 1

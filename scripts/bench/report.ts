@@ -189,8 +189,24 @@ const md = [
 	`### bench:landed Part B, on the same server (${suite.connections} connections, 5 s per route)`,
 	'',
 	...tableOf('landed-http.out'),
+	'',
+	'### bench:faults, services failing under load (its own cluster and app)',
+	'',
+	'PostgreSQL stopped for 4 s in the middle of 8 clients creating and listing shipments, then the',
+	'SMTP catcher stopped while bookings queue their e-mail (`scripts/bench/faults.sh`).',
+	'',
+	...faultLines(),
 	''
 ];
+
+/** What bench:faults printed: its answer counts and each check's verdict, as list items. */
+function faultLines(): string[] {
+	const lines = text('faults.out')
+		.split('\n')
+		.map((l) => l.trim())
+		.filter((l) => /^(PASS|FAIL)\s|^answers:|^\d+\/\d+ checks passed/.test(l));
+	return lines.length ? lines.map((l) => `- ${l}`) : ['- (bench:faults did not run)'];
+}
 
 // Written as the project's Prettier would, so `npm run lint` accepts the committed files.
 async function write(file: string, text: string, parser: 'markdown' | 'json') {
