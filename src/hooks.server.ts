@@ -156,11 +156,17 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 		console.error(`[database] ${event.request.method} ${event.url.pathname}: unreachable`);
 		return { message: OUTAGE_MESSAGE, code: 'database_unavailable' };
 	}
+	if (status < 500) {
+		// SvelteKit's own refusals (415 for JSON posted to an action, say): the client's mistake, so
+		// one line, not a stack.
+		console.warn(`[refused ${status}] ${event.request.method} ${event.url.pathname}: ${message}`);
+		return { message };
+	}
 	const id = crypto.randomUUID();
 	try {
 		console.error(`[error ${id}] ${event.request.method} ${event.url.pathname}`, error);
 	} catch {
 		// logging must never turn one error into two
 	}
-	return { message: status >= 500 ? 'Something went wrong on our side.' : message, id };
+	return { message: 'Something went wrong on our side.', id };
 };

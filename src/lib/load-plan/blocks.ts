@@ -195,9 +195,24 @@ function combine(
 const SIDE = [1, 2] as const;
 const STACK = [3] as const;
 
-/** Indices of all[0..to) sorted by `f`, with the sorted keys. */
+/** Indices of all[0..to) sorted by `f` (stable), with the sorted keys. */
 function sortedBy(all: readonly Block[], to: number, f: (b: Block) => number) {
-	const order = Array.from({ length: to }, (_, i) => i).sort((p, q) => f(all[p]!) - f(all[q]!));
+	// Whole non-negative keys (mm, mm²) are packed with their index into one number and sorted
+	// natively: key first, then index, which is the stable order. Exact while below 2^53.
+	const packed = new Float64Array(to);
+	let whole = true;
+	for (let i = 0; i < to; i++) {
+		const k = f(all[i]!);
+		whole &&= Number.isInteger(k) && k >= 0 && k * to + i < Number.MAX_SAFE_INTEGER;
+		packed[i] = k * to + i;
+	}
+	let order: number[];
+	if (whole) {
+		packed.sort();
+		order = Array.from(packed, (v) => v % to);
+	} else {
+		order = Array.from({ length: to }, (_, i) => i).sort((p, q) => f(all[p]!) - f(all[q]!));
+	}
 	return { order, keys: Float64Array.from(order, (i) => f(all[i]!)) };
 }
 
@@ -217,17 +232,20 @@ function spent(limits: BlockLimits): boolean {
 }
 
 /** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
-function compareBlocks(p: Block, q: Block, keys: Map<Block, string>): number {
-	if (p.vol !== q.vol) return q.vol - p.vol;
-	if (p.boxes !== q.boxes) return p.boxes - q.boxes;
-	const kp = keys.get(p)!;
-	const kq = keys.get(q)!;
-	return kp < kq ? -1 : kp > kq ? 1 : 0;
+function sortBlocks(all: Block[], keys: Map<Block, string>): Block[] {
+	// Decorated once, so the comparator does no map lookups.
+	const rows = all.map((b) => ({ b, vol: b.vol, boxes: b.boxes, key: keys.get(b)! }));
+	rows.sort((p, q) => {
+		if (p.vol !== q.vol) return q.vol - p.vol;
+		if (p.boxes !== q.boxes) return p.boxes - q.boxes;
+		return p.key < q.key ? -1 : p.key > q.key ? 1 : 0;
+	});
+	return rows.map((r) => r.b);
 }
 
 /**
  * Simple blocks, then general blocks in rounds (each round pairs the blocks of the last round with
- * all so far) until `maxBlocks`, no new block, or the work cap. Sorted by compareBlocks.
+ * all so far) until `maxBlocks`, no new block, or the work cap. Sorted by sortBlocks.
  */
 export function generateBlocks(
 	types: CoreBoxType[],
@@ -287,5 +305,5 @@ export function generateBlocks(
 		if (spent(limits)) break;
 		from = to;
 	}
-	return all.sort((p, q) => compareBlocks(p, q, keys));
+	return sortBlocks(all, keys);
 }

@@ -9,9 +9,14 @@
  * 3. the earlier candidate type.
  * The work budget is shared evenly between the sequences, and within one between the containers
  * it is still expected to need; work one of them leaves unspent passes on to the next.
+ *
+ * Sequences often ask for the same fill twice (a 40 ft taking everything, then the 20 ft tried in
+ * its place, is the 20 ft sequence's first fill). A fill that completed with work to spare is
+ * replayed from memory: the search is deterministic, so a rerun with at least as much work would
+ * take the same steps and report the same work.
  */
 import Decimal from 'decimal.js';
-import { canTake, fillContainer, type FillResult } from './fill-container';
+import { BLOCK_WORK_SHARE, canTake, fillContainer, type FillResult } from './fill-container';
 import type { PreparedContainer, PreparedItem } from './prepare';
 import { worse, type StopReason } from './work-budget';
 
@@ -65,20 +70,46 @@ function alternatives(primary: number, containers: readonly PreparedContainer[],
 		);
 }
 
+/** Fills already searched in this choice, by container type and pieces left. */
+type FillMemory = Map<string, FillResult>;
+
+/**
+ * fillContainer(), or the remembered fill of the same container and pieces when that one
+ * completed on less work than block generation alone may take of `work` (BLOCK_WORK_SHARE, the
+ * tighter of the search's two work limits), so no limit could have changed its steps.
+ */
+function fillOnce(
+	memory: FillMemory,
+	items: readonly PreparedItem[],
+	remaining: readonly number[],
+	type: number,
+	containers: readonly PreparedContainer[],
+	work: number,
+	o: MixOptions
+): FillResult {
+	const key = `${type}|${remaining.join(',')}`;
+	const known = memory.get(key);
+	if (known && known.stoppedBy === 'complete' && known.work < work * BLOCK_WORK_SHARE) return known;
+	const fill = fillContainer(items, remaining, containers[type]!, work, o.deadline, o.seed);
+	memory.set(key, fill);
+	return fill;
+}
+
 function sequence(
 	primary: number,
 	items: readonly PreparedItem[],
 	containers: readonly PreparedContainer[],
 	start: readonly number[],
 	o: MixOptions,
-	budget: number
+	budget: number,
+	memory: FillMemory
 ): Sequence {
 	const remaining = start.slice();
 	const fills: Sequence['fills'] = [];
 	let stoppedBy: StopReason = 'complete';
 	let used = 0;
 	const run = (type: number, slice: number): FillResult => {
-		const f = fillContainer(items, remaining, containers[type]!, slice, o.deadline, o.seed);
+		const f = fillOnce(memory, items, remaining, type, containers, slice, o);
 		used += f.work;
 		stoppedBy = worse(stoppedBy, f.stoppedBy);
 		return f;
@@ -140,9 +171,10 @@ export function chooseMix(
 	let best: Sequence | null = null;
 	let stoppedBy: StopReason = 'complete';
 	let used = 0;
+	const memory: FillMemory = new Map();
 	for (let t = 0; t < containers.length; t++) {
 		const share = Math.max(0, o.work - used) / (containers.length - t);
-		const s = sequence(t, items, containers, remaining, o, share);
+		const s = sequence(t, items, containers, remaining, o, share, memory);
 		used += s.work;
 		stoppedBy = worse(stoppedBy, s.stoppedBy);
 		if (best === null || better(s, best, containers, o.rates)) best = s;
