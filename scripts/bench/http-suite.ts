@@ -2,6 +2,7 @@
 // 10,000 bench shipments, each for BENCH_DURATION seconds at BENCH_CONNECTIONS (default 20) on
 // loopback, against a no-op route of the same server measured in the same run (first and again
 // last, to show the floor did not drift). Writes the figures as JSON for report.ts.
+// BENCH_ONLY=key,key (say calc-load-plan) times only those routes, between the two no-ops.
 // Usage (all.sh sets these): BENCH_BASE=http://127.0.0.1:4397 BENCH_APP_PID=<node build's pid>
 //   BENCH_SHIPMENT_ID=<Hallvik's demo shipment> BENCH_CEDAR_ID=<Cedarpoint's, papers issued>
 //   BENCH_OUT=<file.json> tsx scripts/bench/http-suite.ts
@@ -71,7 +72,7 @@ const noop: Route = {
 	status: 204,
 	contentType: ''
 };
-const routes: Route[] = [
+const allRoutes: Route[] = [
 	noop,
 	{
 		key: 'signin',
@@ -174,6 +175,10 @@ const routes: Route[] = [
 	},
 	{ ...noop, key: 'noop-end', label: 'No-op GET /api/ping again, last (drift check)' }
 ];
+const only = (process.env.BENCH_ONLY ?? '').split(',').filter(Boolean);
+const routes = only.length
+	? allRoutes.filter((r) => r.kind === 'noop' || only.includes(r.key))
+	: allRoutes;
 
 async function send(route: Route): Promise<Response> {
 	return fetch(`${base}${route.path}`, {

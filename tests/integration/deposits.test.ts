@@ -20,7 +20,6 @@ import {
 	today
 } from '$lib/server/services/deposits';
 import { shipmentLandedCost } from '$lib/server/services/landed-cost/compute';
-import type { ServiceResult } from '$lib/server/services/result';
 import { depositRequestSchema } from '$lib/schemas/deposits';
 import { startStripeFake, type StripeFake } from '../../scripts/stripe-fake/app';
 import { signatureHeader } from '../../scripts/stripe-fake/webhooks';
@@ -30,6 +29,8 @@ import {
 	startWebhookReceiver,
 	type WebhookReceiver
 } from './webhook-receiver';
+import { deleteDeposits } from './deposit-cleanup';
+import { ok } from './service-results';
 
 const FAKE_PORT = Number(process.env.STRIPE_FAKE_PORT ?? 12111);
 const config: StripeConfig = {
@@ -86,20 +87,8 @@ beforeAll(async () => {
 afterAll(async () => {
 	await fake?.close();
 	await receiver?.close();
-	if (created.length) {
-		await sequelize.query('DELETE FROM stripe_events WHERE deposit_id IN (:ids)', {
-			replacements: { ids: created }
-		});
-		await sequelize.query('DELETE FROM deposits WHERE id IN (:ids)', {
-			replacements: { ids: created }
-		});
-	}
+	await deleteDeposits(created);
 });
-
-function ok<T>(result: ServiceResult<T>, what: string): T {
-	if (!result.ok) throw new Error(`${what} was refused: ${JSON.stringify(result)}`);
-	return result.value;
-}
 
 const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
 

@@ -15,7 +15,6 @@ import { issuePapers } from '$lib/server/services/documents/issue';
 import { documentRegister, downloadPapers } from '$lib/server/services/documents/register';
 import { papersZip } from '$lib/server/services/documents/zip';
 import { measureShipment } from '$lib/server/services/shipment-measure';
-import type { ServiceResult } from '$lib/server/services/result';
 import {
 	changeStatus,
 	createShipment,
@@ -26,6 +25,7 @@ import { paperDetailsSchema } from '$lib/schemas/documents';
 import { shipmentSchema } from '$lib/schemas/shipments';
 import { formatHsCode } from '$lib/trade/hs-code';
 import { demoOrganization, sequelize, sessionUserFor } from './db';
+import { ok } from './service-results';
 
 const IP = '198.51.100.78'; // RFC 5737 TEST-NET-2
 let coordinator: SessionUser;
@@ -37,11 +37,6 @@ const ids = { hallvik: '', broker: '', consignee: '', origin: '', destination: '
 const products: Record<string, string> = {};
 const created = new Set<string>();
 const BOTH = ['commercial_invoice', 'packing_list'] as const;
-
-function ok<T>(result: ServiceResult<T>, what: string): T {
-	if (!result.ok) throw new Error(`${what} was refused: ${JSON.stringify(result)}`);
-	return result.value;
-}
 
 beforeAll(async () => {
 	[coordinator, hallvikBuyer, wattlebirdBuyer, broker, finance] = await Promise.all([

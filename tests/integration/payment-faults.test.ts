@@ -12,12 +12,13 @@ import {
 	requestDeposit,
 	startCheckout
 } from '$lib/server/services/deposits';
-import type { ServiceResult } from '$lib/server/services/result';
 import { depositRequestSchema } from '$lib/schemas/deposits';
 import { startStripeFake, type StripeFake } from '../../scripts/stripe-fake/app';
 import { Store } from '../../scripts/stripe-fake/objects';
-import { sequelize, sessionUserFor } from './db';
+import { sessionUserFor } from './db';
 import { startWebhookReceiver, type WebhookReceiver } from './webhook-receiver';
+import { deleteDeposits } from './deposit-cleanup';
+import { ok } from './service-results';
 
 const ORIGIN = 'http://127.0.0.1:4998';
 const context = { origin: ORIGIN, ip: '198.51.100.91' }; // RFC 5737 TEST-NET-2
@@ -51,11 +52,6 @@ async function stopFake() {
 	fake = null;
 }
 
-function ok<T>(result: ServiceResult<T>, what: string): T {
-	if (!result.ok) throw new Error(`${what} was refused: ${JSON.stringify(result)}`);
-	return result.value;
-}
-
 const deposit = async (id: string) =>
 	(await listDeposits(finance, hallvik))!.find((d) => d.id === id)!;
 
@@ -82,14 +78,7 @@ beforeAll(async () => {
 afterAll(async () => {
 	await stopFake();
 	await receiver?.close();
-	if (created.length) {
-		await sequelize.query('DELETE FROM stripe_events WHERE deposit_id IN (:ids)', {
-			replacements: { ids: created }
-		});
-		await sequelize.query('DELETE FROM deposits WHERE id IN (:ids)', {
-			replacements: { ids: created }
-		});
-	}
+	await deleteDeposits(created);
 });
 
 describe('the payment provider stopped mid-run', () => {

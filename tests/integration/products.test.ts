@@ -13,6 +13,7 @@ import type { ServiceResult } from '$lib/server/services/users';
 import { productSchema, type ProductInput } from '$lib/schemas/products';
 import { inchesToMm, lbToKg } from '$lib/packing/units';
 import { countRows, sessionUserFor, uniqueSuffix } from './db';
+import { ok } from './service-results';
 
 const IP = '198.51.100.78'; // RFC 5737 TEST-NET-2: only stored in audit_events.ip
 
@@ -56,11 +57,6 @@ function productInput(overrides: Partial<z.input<typeof productSchema>> = {}): P
 		maxLoadOnTop: '60',
 		...overrides
 	});
-}
-
-function ok<T>(result: ServiceResult<T>, what: string): T {
-	if (!result.ok) throw new Error(`${what} was refused: ${JSON.stringify(result)}`);
-	return result.value;
 }
 
 function refused<T>(result: ServiceResult<T>) {

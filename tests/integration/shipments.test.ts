@@ -43,6 +43,7 @@ import {
 } from '$lib/schemas/shipments';
 import type { ShipmentStatus } from '$lib/trade/shipment-status';
 import { countRows, demoOrganization, sequelize, sessionUserFor, uniqueSuffix } from './db';
+import { ok } from './service-results';
 
 const IP = '198.51.100.77'; // RFC 5737 TEST-NET-2: only stored in audit_events.ip
 const MISSING_ID = '00000000-0000-4000-8000-000000000000';
@@ -106,11 +107,6 @@ function productOf(sku: string): { id: string; unitPrice: string } {
 	const p = product[sku];
 	if (!p) throw new Error(`No demo product ${sku}: is the database seeded?`);
 	return p;
-}
-
-function ok<T>(result: ServiceResult<T>, what: string): T {
-	if (!result.ok) throw new Error(`${what} was refused: ${JSON.stringify(result)}`);
-	return result.value;
 }
 
 function refused<T>(result: ServiceResult<T>) {

@@ -1,11 +1,15 @@
 /**
- * Runs planLoad in a worker thread, so a search of a few seconds never blocks the requests of
- * others. One worker at a time per process (the machine's cores serve the requests too); later
- * jobs wait in a queue bounded by the search time they ask for. The worker is kept between jobs
- * (starting one and compiling the planner cost about 100 ms, more than a small plan) and stopped
- * after a minute idle. A worker that crashes, runs out of memory or overruns its time is stopped
- * and reported as a plain refusal, never as an exception with a stack; the next job gets a new one.
+ * Runs planLoad in worker threads, so a search of a few seconds never blocks the requests of
+ * others. Two lanes on a machine with two cores or more: the first takes any job, the second only
+ * short searches (QUICK_BUDGET_MS or less), so small "what if" plans do not queue behind each
+ * other or behind a long search, while long searches never hold more than one core (the others
+ * serve the requests). Later jobs wait in a queue bounded by the search time they ask for. Workers
+ * are kept between jobs (starting one and compiling the planner cost about 100 ms, more than a
+ * small plan) and stopped after a minute idle. A worker that crashes, runs out of memory or
+ * overruns its time is stopped and reported as a plain refusal, never as an exception with a
+ * stack; the next job gets a new one.
  */
+import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import {
 	DEFAULT_TIME_BUDGET_MS,
@@ -22,7 +26,7 @@ export type RunOutcome =
 	| { ok: false; code: 'busy' | 'timeout' | 'crashed'; message: string };
 
 /**
- * Search time the waiting jobs may ask for in all, ms; a job beyond it is refused (the server is
+ * Search time the waiting (not started) jobs may ask for in all, ms; a job beyond it is refused (the server is
  * busy). Eight searches of the default 3 s, or many more small ones.
  */
 export const MAX_QUEUED_BUDGET_MS = 8 * DEFAULT_TIME_BUDGET_MS;
@@ -34,11 +38,21 @@ const MEMORY_MB = 512;
 /** A worker idle this long is stopped, giving its memory back. */
 const IDLE_MS = 60_000;
 
-let tail: Promise<unknown> = Promise.resolve();
-let waiting = 0;
+/** Jobs whose search budget is at most this may run in the second lane. */
+export const QUICK_BUDGET_MS = 500;
+/** Largest budget each lane takes: one general lane, and a quick one where there is a core for it. */
+const LANES: number[] = availableParallelism() >= 2 ? [Infinity, QUICK_BUDGET_MS] : [Infinity];
+
+interface Job {
+	budget: number;
+	start: () => Promise<void>;
+}
+/** Jobs not started yet, oldest first. */
+const queue: Job[] = [];
+const laneBusy: boolean[] = LANES.map(() => false);
 let waitingBudgetMs = 0;
-/** The worker kept from the last job that finished well, with its idle timer. */
-let idle: { worker: Worker; timer: NodeJS.Timeout } | null = null;
+/** Workers kept from jobs that finished well, each with its idle timer. */
+const idle: { worker: Worker; timer: NodeJS.Timeout }[] = [];
 
 async function workerUrl(): Promise<URL> {
 	// A dynamic import keeps the worker module in a chunk of its own in the server build.
@@ -60,9 +74,10 @@ function startWorker(url: URL): Worker {
 	// A kept worker that dies while idle is simply not used again.
 	worker.on('error', () => {});
 	worker.once('exit', () => {
-		if (idle?.worker === worker) {
-			clearTimeout(idle.timer);
-			idle = null;
+		const i = idle.findIndex((kept) => kept.worker === worker);
+		if (i >= 0) {
+			clearTimeout(idle[i]!.timer);
+			idle.splice(i, 1);
 		}
 	});
 	return worker;
@@ -70,9 +85,9 @@ function startWorker(url: URL): Worker {
 
 /** The kept worker, or a new one. */
 function takeWorker(url: URL): Worker {
-	if (!idle) return startWorker(url);
-	const { worker, timer } = idle;
-	idle = null;
+	const kept = idle.pop();
+	if (!kept) return startWorker(url);
+	const { worker, timer } = kept;
 	clearTimeout(timer);
 	worker.ref();
 	return worker;
@@ -83,7 +98,7 @@ function keepWorker(worker: Worker): void {
 	worker.unref();
 	const timer = setTimeout(() => void worker.terminate(), IDLE_MS);
 	timer.unref();
-	idle = { worker, timer };
+	idle.push({ worker, timer });
 }
 
 function runOnce(
@@ -148,13 +163,30 @@ function runOnce(
 	});
 }
 
-/** Plans `input` in a worker once the jobs before it are done. */
+/** Starts queued jobs on the free lanes: the oldest job a lane takes goes first. */
+function dispatch(): void {
+	LANES.forEach((maxBudget, lane) => {
+		if (laneBusy[lane]) return;
+		const i = queue.findIndex((job) => job.budget <= maxBudget);
+		if (i < 0) return;
+		const [job] = queue.splice(i, 1);
+		waitingBudgetMs -= job!.budget;
+		laneBusy[lane] = true;
+		void job!.start().finally(() => {
+			laneBusy[lane] = false;
+			dispatch();
+		});
+	});
+}
+
+/** Plans `input` in a worker once a lane that takes it is free. */
 export function runLoadPlan(
 	input: LoadPlanInput,
 	onProgress: (p: LoadPlanProgress) => void = () => {},
 	{ graceMs = GRACE_MS }: { graceMs?: number } = {}
 ): Promise<RunOutcome> {
 	const budget = input.options?.timeBudgetMs ?? DEFAULT_TIME_BUDGET_MS;
+	const waiting = queue.length;
 	// The first to wait is always admitted, whatever it asks for; more wait while their budgets fit.
 	if (waiting > 0 && (waiting >= MAX_QUEUED || waitingBudgetMs + budget > MAX_QUEUED_BUDGET_MS)) {
 		return Promise.resolve({
@@ -163,21 +195,22 @@ export function runLoadPlan(
 			message: 'The load planner is busy with other plans. Try again in a minute.'
 		});
 	}
-	waiting++;
-	waitingBudgetMs += budget;
-	const job = tail.then(async () => {
-		waiting--;
-		waitingBudgetMs -= budget;
-		try {
-			return await runOnce(input, onProgress, await workerUrl(), graceMs);
-		} catch (e) {
-			return {
-				ok: false as const,
-				code: 'crashed' as const,
-				message: `The load planner could not start (${(e as Error).name}).`
-			};
-		}
+	return new Promise((resolve) => {
+		const start = async () => {
+			try {
+				resolve(await runOnce(input, onProgress, await workerUrl(), graceMs));
+			} catch (e) {
+				resolve({
+					ok: false,
+					code: 'crashed',
+					message: `The load planner could not start (${(e as Error).name}).`
+				});
+			}
+		};
+		queue.push({ budget, start });
+		waitingBudgetMs += budget;
+		// Jobs asked for in the same tick queue together before any starts (the queue's bound
+		// applies to them all, as to jobs that arrive while the lanes are busy).
+		queueMicrotask(dispatch);
 	});
-	tail = job;
-	return job;
 }
