@@ -59,3 +59,23 @@ export async function freshShipment(
 	expect(put.status(), await put.text()).toBe(200);
 	return shipmentJson(client, id);
 }
+
+/** A small valid body of POST /api/v1/calc/measure, so mutations reach the packing checks. */
+export const MEASURE_BASE = {
+	products: [
+		{
+			sku: 'FUZZ-1',
+			netKgPerUnit: '0.5',
+			packaging: {
+				unitsPerCarton: 10,
+				lengthMm: 400,
+				widthMm: 300,
+				heightMm: 250,
+				cartonGrossKg: '6.2',
+				orientation: 'this_way_up',
+				maxLoadOnTopKg: '40'
+			}
+		}
+	],
+	lines: [{ sku: 'FUZZ-1', quantity: 25 }]
+};

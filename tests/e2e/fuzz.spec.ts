@@ -16,6 +16,7 @@ import {
 import { judgeAction, judgeApi, judgePage, type Verdict } from './fuzz-verdicts';
 import { DEMO, apiAs } from './helpers';
 import {
+	MEASURE_BASE,
 	freshShipment as copyShipment,
 	headerOf,
 	linesOf,
@@ -77,26 +78,6 @@ function judge(kind: Kind, status: number, contentType: string, text: string): V
 	if (kind === 'page-query') return judgePage(status, text);
 	return judgeApi(status, contentType, text);
 }
-
-/** A small valid body of POST /api/v1/calc/measure, so mutations reach the packing checks. */
-const MEASURE_BASE = {
-	products: [
-		{
-			sku: 'FUZZ-1',
-			netKgPerUnit: '0.5',
-			packaging: {
-				unitsPerCarton: 10,
-				lengthMm: 400,
-				widthMm: 300,
-				heightMm: 250,
-				cartonGrossKg: '6.2',
-				orientation: 'this_way_up',
-				maxLoadOnTopKg: '40'
-			}
-		}
-	],
-	lines: [{ sku: 'FUZZ-1', quantity: 25 }]
-};
 
 const urlencoded = (fields: Record<string, string>): RawRequest => ({
 	headers: {
