@@ -56,8 +56,41 @@ function key(b: Block): string {
 	return `${b.dx},${b.dy},${b.dz},${b.ax},${b.ay}:${b.types.join('.')}:${b.nums.join('.')}`;
 }
 
-function simpleBlocks(types: CoreBoxType[], c: CoreContainer): Block[] {
-	const out: Block[] = [];
+function simpleBlock(bt: CoreBoxType, t: number, o: number, nx: number, ny: number, nz: number) {
+	const e = bt.extents[o]!;
+	const n = nx * ny * nz;
+	const cap = bt.cap === NO_LOAD ? NO_LOAD : bt.cap - (nz - 1) * bt.weight;
+	const block: Block = {
+		dx: nx * e.dx,
+		dy: ny * e.dy,
+		dz: nz * e.dz,
+		ax: nx * e.dx,
+		ay: ny * e.dy,
+		vol: n * bt.volume,
+		weight: n * bt.weight,
+		cap,
+		boxes: n,
+		types: [t],
+		nums: [n],
+		kind: 0,
+		t,
+		o,
+		nx,
+		ny,
+		nz,
+		a: null,
+		b: null
+	};
+	return block;
+}
+
+/**
+ * Every nx × ny × nz block of each type and orientation that fits; over `maxBlocks`, every single
+ * box and then the largest (by box volume, in the order made). Candidates are listed as numbers
+ * first, and only the kept ones become blocks: there are often many times more than are kept.
+ */
+function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number): Block[] {
+	const spec: number[] = []; // t, o, nx, ny, nz per candidate
 	types.forEach((bt, t) => {
 		bt.extents.forEach((e, o) => {
 			const maxX = Math.min(Math.floor(c.L / e.dx), bt.count);
@@ -70,35 +103,28 @@ function simpleBlocks(types: CoreBoxType[], c: CoreContainer): Block[] {
 			for (let nz = 1; nz <= maxZ; nz++) {
 				for (let ny = 1; ny <= maxY && ny * nz <= bt.count; ny++) {
 					for (let nx = 1; nx <= maxX && nx * ny * nz <= bt.count; nx++) {
-						const n = nx * ny * nz;
-						const cap = bt.cap === NO_LOAD ? NO_LOAD : bt.cap - (nz - 1) * bt.weight;
-						out.push({
-							dx: nx * e.dx,
-							dy: ny * e.dy,
-							dz: nz * e.dz,
-							ax: nx * e.dx,
-							ay: ny * e.dy,
-							vol: n * bt.volume,
-							weight: n * bt.weight,
-							cap,
-							boxes: n,
-							types: [t],
-							nums: [n],
-							kind: 0,
-							t,
-							o,
-							nx,
-							ny,
-							nz,
-							a: null,
-							b: null
-						});
+						spec.push(t, o, nx, ny, nz);
 					}
 				}
 			}
 		});
 	});
-	return out;
+	const made = (i: number) =>
+		simpleBlock(types[spec[i]!]!, spec[i]!, spec[i + 1]!, spec[i + 2]!, spec[i + 3]!, spec[i + 4]!);
+	const count = spec.length / 5;
+	if (count <= maxBlocks) return Array.from({ length: count }, (_, k) => made(5 * k));
+	const singles: number[] = [];
+	const rest: number[] = [];
+	for (let i = 0; i < spec.length; i += 5) {
+		if (spec[i + 2]! * spec[i + 3]! * spec[i + 4]! === 1) singles.push(i);
+		else rest.push(i);
+	}
+	const vol = (i: number) => spec[i + 2]! * spec[i + 3]! * spec[i + 4]! * types[spec[i]!]!.volume;
+	let top = 0;
+	for (const i of rest) top = Math.max(top, vol(i));
+	const keep = Math.max(0, maxBlocks - singles.length);
+	const largest = sortedIndices(rest.length, (k) => top - vol(rest[k]!)).slice(0, keep);
+	return singles.map(made).concat(largest.map((k) => made(rest[k]!)));
 }
 
 /** Merged sparse counts of a and b, or null when more than `count` of some type. */
@@ -195,25 +221,58 @@ function combine(
 const SIDE = [1, 2] as const;
 const STACK = [3] as const;
 
-/** Indices of all[0..to) sorted by `f` (stable), with the sorted keys. */
-function sortedBy(all: readonly Block[], to: number, f: (b: Block) => number) {
-	// Whole non-negative keys (mm, mm²) are packed with their index into one number and sorted
-	// natively: key first, then index, which is the stable order. Exact while below 2^53.
-	const packed = new Float64Array(to);
+interface SortedIndex {
+	order: number[];
+	keys: Float64Array;
+}
+
+/** 0..n-1 sorted by `f` (stable). */
+function sortedIndices(n: number, f: (i: number) => number): number[] {
+	// Whole non-negative keys (mm, mm², mm³) are packed with their index into one number and
+	// sorted natively: key first, then index, which is the stable order. Exact while below 2^53.
+	const packed = new Float64Array(n);
 	let whole = true;
-	for (let i = 0; i < to; i++) {
-		const k = f(all[i]!);
-		whole &&= Number.isInteger(k) && k >= 0 && k * to + i < Number.MAX_SAFE_INTEGER;
-		packed[i] = k * to + i;
+	for (let i = 0; i < n; i++) {
+		const k = f(i);
+		whole &&= Number.isInteger(k) && k >= 0 && k * n + i < Number.MAX_SAFE_INTEGER;
+		packed[i] = k * n + i;
 	}
-	let order: number[];
+	const order: number[] = new Array(n);
 	if (whole) {
 		packed.sort();
-		order = Array.from(packed, (v) => v % to);
+		for (let i = 0; i < n; i++) order[i] = packed[i]! % n;
 	} else {
-		order = Array.from({ length: to }, (_, i) => i).sort((p, q) => f(all[p]!) - f(all[q]!));
+		for (let i = 0; i < n; i++) order[i] = i;
+		order.sort((p, q) => f(p) - f(q));
 	}
-	return { order, keys: Float64Array.from(order, (i) => f(all[i]!)) };
+	return order;
+}
+
+/** Indices from..to of `all` sorted by `f` (stable), with the sorted keys. */
+function sortedBy(all: readonly Block[], from: number, to: number, f: (b: Block) => number) {
+	const order = sortedIndices(to - from, (i) => f(all[from + i]!)).map((i) => from + i);
+	const keys = new Float64Array(order.length);
+	for (let i = 0; i < order.length; i++) keys[i] = f(all[order[i]!]!);
+	return { order, keys };
+}
+
+/** Two sorted indices merged, `a`'s (the lower indices) first among equal keys: stable. */
+function merged(a: SortedIndex, b: SortedIndex): SortedIndex {
+	const n = a.order.length + b.order.length;
+	const order: number[] = new Array(n);
+	const keys = new Float64Array(n);
+	let i = 0;
+	let j = 0;
+	for (let k = 0; k < n; k++) {
+		if (j >= b.order.length || (i < a.order.length && a.keys[i]! <= b.keys[j]!)) {
+			order[k] = a.order[i]!;
+			keys[k] = a.keys[i++]!;
+		} else {
+			order[k] = b.order[j]!;
+			keys[k] = b.keys[j++]!;
+		}
+	}
+	return { order, keys };
 }
 
 function lowerBound(keys: Float64Array, v: number): number {
@@ -231,16 +290,33 @@ function spent(limits: BlockLimits): boolean {
 	return limits.meter.used >= limits.maxWork || performance.now() > limits.meter.deadline;
 }
 
+/** Blocks by box volume, largest first; equal volumes keep their order (a stable sort). */
+function largestFirst(blocks: readonly Block[]): Block[] {
+	let top = 0;
+	for (const b of blocks) top = Math.max(top, b.vol);
+	return sortedBy(blocks, 0, blocks.length, (b) => top - b.vol).order.map((i) => blocks[i]!);
+}
+
 /** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
 function sortBlocks(all: Block[], keys: Map<Block, string>): Block[] {
-	// Decorated once, so the comparator does no map lookups.
-	const rows = all.map((b) => ({ b, vol: b.vol, boxes: b.boxes, key: keys.get(b)! }));
-	rows.sort((p, q) => {
-		if (p.vol !== q.vol) return q.vol - p.vol;
-		if (p.boxes !== q.boxes) return p.boxes - q.boxes;
-		return p.key < q.key ? -1 : p.key > q.key ? 1 : 0;
-	});
-	return rows.map((r) => r.b);
+	// By volume natively first; only runs of equal volume need the comparator (and the keys).
+	const byVol = largestFirst(all);
+	const out: Block[] = [];
+	for (let i = 0; i < byVol.length;) {
+		let j = i + 1;
+		while (j < byVol.length && byVol[j]!.vol === byVol[i]!.vol) j++;
+		if (j - i === 1) out.push(byVol[i]!);
+		else {
+			const rows = byVol.slice(i, j).map((b) => ({ b, boxes: b.boxes, key: keys.get(b)! }));
+			rows.sort((p, q) => {
+				if (p.boxes !== q.boxes) return p.boxes - q.boxes;
+				return p.key < q.key ? -1 : p.key > q.key ? 1 : 0;
+			});
+			for (const r of rows) out.push(r.b);
+		}
+		i = j;
+	}
+	return out;
 }
 
 /**
@@ -263,21 +339,19 @@ export function generateBlocks(
 		all.push(b);
 		return true;
 	};
-	let simple = simpleBlocks(types, c);
-	if (simple.length > limits.maxBlocks) {
-		// Keep every single box, then the largest.
-		const singles = simple.filter((b) => b.boxes === 1);
-		const rest = simple.filter((b) => b.boxes > 1).sort((p, q) => q.vol - p.vol);
-		simple = singles.concat(rest.slice(0, Math.max(0, limits.maxBlocks - singles.length)));
-	}
-	for (const b of simple) add(b);
+	for (const b of simpleBlocks(types, c, limits.maxBlocks)) add(b);
 	let from = 0;
+	const height = (b: Block) => b.dz;
+	const area = (b: Block) => b.dx * b.dy;
+	let byHeight: SortedIndex = { order: [], keys: new Float64Array(0) };
+	let byArea = byHeight;
 	while (all.length < limits.maxBlocks && from < all.length) {
 		const to = all.length;
 		// Partners are looked up in windows: side by side only with nearly the same height,
-		// stacked only with nearly the same footprint (others rarely reach MIN_FILL).
-		const byHeight = sortedBy(all, to, (b) => b.dz);
-		const byArea = sortedBy(all, to, (b) => b.dx * b.dy);
+		// stacked only with nearly the same footprint (others rarely reach MIN_FILL). Each round
+		// sorts only its new blocks and merges them in.
+		byHeight = merged(byHeight, sortedBy(all, from, to, height));
+		byArea = merged(byArea, sortedBy(all, from, to, area));
 		const m = limits.meter;
 		const tryPair = (ob: Block, nb: Block, kind: 1 | 2 | 3): boolean => {
 			m.used += 2;

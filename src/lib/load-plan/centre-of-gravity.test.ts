@@ -17,6 +17,17 @@ describe('centreOfGravity', () => {
 		expect(cog.transverseOffsetMm).toBe(0);
 	});
 
+	it('gives the same figure whether pieces of one weight are summed first or one by one', () => {
+		// Arithmetic: (3 × 12.345 × 1000.5 + 7.1 × 4000) / (3 × 12.345 + 7.1) = 1483.0297… mm.
+		const half = [1000.5, 1000.5, 1000.5].map((cx) => ({ weightKg: '12.345', cx, cy: 0, cz: 0 }));
+		const heavy = { weightKg: '7.1', cx: 4000, cy: 0, cz: 0 };
+		expect(centreOfGravity([...half, heavy], 6000, 2000)!.xMm).toBe(1483);
+		// A centre that is not a whole or half millimetre takes the piece-by-piece path.
+		const odd = { weightKg: '1', cx: 0.25, cy: 0, cz: 0 };
+		const both = centreOfGravity([odd, { ...odd, cx: 0.75 }], 6000, 2000)!;
+		expect(both.xMm).toBe(0.5);
+	});
+
 	it('is null for massless cargo', () => {
 		expect(centreOfGravity([{ weightKg: '0', cx: 1, cy: 1, cz: 1 }], 10, 10)).toBeNull();
 	});

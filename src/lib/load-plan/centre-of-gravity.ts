@@ -31,11 +31,44 @@ function mm1(d: Decimal): number {
 	return d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
 }
 
-export function centreOfGravity(
-	points: readonly MassPoint[],
-	lengthMm: number,
-	widthMm: number
-): CentreOfGravity | null {
+/**
+ * Mass and first moments, exact: Σw and Σw·c. Pieces of one weight are summed first (their
+ * doubled centres are whole numbers, exact in floating point), so the decimal work is per weight,
+ * not per piece; Σw·c = Σ over weights of w · Σc, the same figure.
+ */
+function moments(points: readonly MassPoint[]) {
+	const byWeight = new Map<string, { n: number; x2: number; y2: number; z2: number }>();
+	for (const p of points) {
+		const x2 = 2 * p.cx;
+		const y2 = 2 * p.cy;
+		const z2 = 2 * p.cz;
+		if (!Number.isInteger(x2) || !Number.isInteger(y2) || !Number.isInteger(z2)) {
+			return pieceMoments(points);
+		}
+		const sum = byWeight.get(p.weightKg);
+		if (sum) {
+			sum.n++;
+			sum.x2 += x2;
+			sum.y2 += y2;
+			sum.z2 += z2;
+		} else byWeight.set(p.weightKg, { n: 1, x2, y2, z2 });
+	}
+	let m = new Decimal(0);
+	let mx = new Decimal(0);
+	let my = new Decimal(0);
+	let mz = new Decimal(0);
+	for (const [weight, sum] of byWeight) {
+		const w = new Decimal(weight);
+		m = m.plus(w.times(sum.n));
+		mx = mx.plus(w.times(sum.x2).dividedBy(2));
+		my = my.plus(w.times(sum.y2).dividedBy(2));
+		mz = mz.plus(w.times(sum.z2).dividedBy(2));
+	}
+	return { m, mx, my, mz };
+}
+
+/** The same moments piece by piece (centres that are not whole or half millimetres). */
+function pieceMoments(points: readonly MassPoint[]) {
 	let m = new Decimal(0);
 	let mx = new Decimal(0);
 	let my = new Decimal(0);
@@ -47,6 +80,15 @@ export function centreOfGravity(
 		my = my.plus(w.times(p.cy));
 		mz = mz.plus(w.times(p.cz));
 	}
+	return { m, mx, my, mz };
+}
+
+export function centreOfGravity(
+	points: readonly MassPoint[],
+	lengthMm: number,
+	widthMm: number
+): CentreOfGravity | null {
+	const { m, mx, my, mz } = moments(points);
 	if (m.isZero()) return null;
 	const x = mx.dividedBy(m);
 	const y = my.dividedBy(m);
