@@ -14,12 +14,15 @@ export const WHY_OVER: Record<string, string> = {
 		'slowest approach 1 s when other work shares the cores. The hash cost is the protection ' +
 		'against password guessing and is not lowered; a person signs in once per 8-hour session.',
 	'calc-load-plan':
-		'by design. The planner runs one search at a time per process in its worker thread, so the ' +
-		'other core keeps serving pages; 20 requests at once wait their turn, and p95 ≈ 20 × one small ' +
-		'plan (about 14 ms warm). Kept warm between jobs since this benchmark (it was about 140 ms a ' +
-		'plan, and 11 of 20 were refused as busy); a second worker would take the core the requests ' +
-		'need on 2 cores. Plans are searches of up to seconds (default budget 3 s), asked for once ' +
-		'per change, and a stored shipment’s plan is read from its kept copy (the GET above).',
+		'CPU-bound in the planner. Each request is a fresh search (nothing is kept): about 5.5 ms of ' +
+		'one core in process for these 240 cartons, plus the request thread’s share. Two planner ' +
+		'lanes run at once on 2 cores (the second only takes searches of 500 ms or less, so long ' +
+		'searches never hold both cores), which with autocannon and the request thread saturates the ' +
+		'machine near 200 requests/s: 20 requests at once queue, p95 ≈ 20 ÷ the rate. Profiled ' +
+		'(December 2026): block generation about half of the worker’s time, gap tables and the ' +
+		'beam search most of the rest. A stored shipment’s plan is read from its kept copy (the GET ' +
+		'above). ' +
+		SHARED,
 	'list-page':
 		'CPU-bound: about 2.4 ms of the app’s CPU per page (server rendering, the CSP hash of the ' +
 		'start-up script, four queries) and 1.2 ms of PostgreSQL’s (the exact count of 10,000 ' +
