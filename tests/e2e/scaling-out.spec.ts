@@ -1,8 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import { expect, test, type APIRequestContext } from '@playwright/test';
-import { signatureHeader } from '../../scripts/stripe-fake/webhooks';
 import { closeDatabase, rows } from './database';
 import { DEMO, apiAs } from './helpers';
+import { deliverSigned } from './signed-webhook';
 
 // Two app processes against one database (playwright.config.ts starts both): Landfall keeps no
 // state in its processes, so requests may go to either. Requests alternate between them here.
@@ -14,7 +14,6 @@ test.describe.configure({ mode: 'serial' });
 test.setTimeout(180_000);
 
 const B = `http://127.0.0.1:${process.env.E2E_PORT_B ?? Number(process.env.E2E_PORT ?? 4390) + 1}`;
-const WEBHOOK_SECRET = 'whsec_landfall_e2e'; // playwright.config.ts
 const PARALLEL_ISSUES = 50;
 
 let A = '';
@@ -223,15 +222,7 @@ test('a Stripe webhook delivered to both processes at once is applied once', asy
 			}
 		}
 	});
-	const deliver = (base: string) =>
-		fetch(`${base}/api/v1/stripe/webhook`, {
-			method: 'POST',
-			headers: {
-				'content-type': 'application/json',
-				'stripe-signature': signatureHeader(payload, WEBHOOK_SECRET, Math.floor(Date.now() / 1000))
-			},
-			body: payload
-		});
+	const deliver = (base: string) => deliverSigned(base, payload);
 	const answers = await Promise.all([deliver(A), deliver(B)]);
 	const bodies = (await Promise.all(answers.map((a) => a.json()))) as { duplicate: boolean }[];
 	expect(answers.map((a) => a.status)).toEqual([200, 200]);
