@@ -13,6 +13,7 @@ import { createStripe, usePayments, type StripeConfig } from '$lib/server/paymen
 import {
 	cancelDeposit,
 	expirePastDue,
+	getDeposit,
 	listDeposits,
 	refundDeposit,
 	requestDeposit,
@@ -224,15 +225,34 @@ describe('requesting a deposit', () => {
 		const id = await newDeposit('99.00');
 		expect((await listDeposits(buyer, hallvik))!.map((d) => d.id)).toContain(id);
 		expect(await listDeposits(otherBuyer, hallvik)).toBeNull();
-		expect(await startCheckout(otherBuyer, id, ORIGIN)).toMatchObject({ ok: false, status: 404 });
+		expect(await startCheckout(otherBuyer, hallvik, id, ORIGIN)).toMatchObject({
+			ok: false,
+			status: 404
+		});
+	});
+
+	it('finds a deposit only on its own shipment, for staff and its own customer alike', async () => {
+		const id = await newDeposit('64.00');
+		const before = await deposit(id);
+		const notFound = { ok: false, status: 404 };
+		expect(await startCheckout(buyer, wattlebird, id, ORIGIN)).toMatchObject(notFound);
+		expect(await startCheckout(otherBuyer, wattlebird, id, ORIGIN)).toMatchObject(notFound);
+		expect(await cancelDeposit(coordinator, wattlebird, id, before.version, null)).toMatchObject(
+			notFound
+		);
+		expect(await refundDeposit(finance, wattlebird, id, before.version, null)).toMatchObject(
+			notFound
+		);
+		expect(await getDeposit(finance, wattlebird, id)).toBeNull();
+		expect(await deposit(id)).toEqual(before);
 	});
 });
 
 describe('paying through Checkout and the webhook', () => {
 	it('creates one Checkout Session per deposit with metadata, and reuses it', async () => {
 		const id = await newDeposit('480.00');
-		const first = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
-		const again = ok(await startCheckout(buyer, id, ORIGIN), 'checkout again');
+		const first = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
+		const again = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout again');
 		expect(again.url).toBe(first.url);
 		const session = await createStripe(config).checkout.sessions.retrieve(sessionIdOf(first.url));
 		expect(session).toMatchObject({
@@ -248,7 +268,7 @@ describe('paying through Checkout and the webhook', () => {
 
 	it('marks the deposit paid only from the webhook, once, even when delivered twice or concurrently', async () => {
 		const id = await newDeposit('1250.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		const paid = await payOnPage(url, '4242 4242 4242 4242');
 		expect(paid.status).toBe(303);
 		expect(paid.headers.get('location')).toMatch(
@@ -306,7 +326,7 @@ describe('paying through Checkout and the webhook', () => {
 
 	it('applies a first delivery once when three arrive at the same moment', async () => {
 		const id = await newDeposit('88.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		failNext = 1000; // the fake gives up on every delivery: the event stays unapplied
 		await payOnPage(url, '4242424242424242');
 		await fake.settled();
@@ -333,7 +353,7 @@ describe('paying through Checkout and the webhook', () => {
 
 	it('retries a delivery that failed, and applies it once', async () => {
 		const id = await newDeposit('75.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		failNext = 2;
 		const before = fake.deliveries.length;
 		await payOnPage(url, '4242424242424242');
@@ -385,7 +405,7 @@ describe('paying through Checkout and the webhook', () => {
 
 	it('flags a payment whose amount differs, and does not accept it', async () => {
 		const id = await newDeposit('300.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		const response = await fetch(`${fake.url}/_fake/checkout/sessions/${sessionIdOf(url)}/pay`, {
 			method: 'POST',
 			headers: { authorization: `Bearer ${config.secretKey}` },
@@ -405,7 +425,7 @@ describe('paying through Checkout and the webhook', () => {
 
 	it('leaves the deposit unpaid after a declined card, with the session still open', async () => {
 		const id = await newDeposit('210.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		const declined = await payOnPage(url, '4000 0000 0000 0002');
 		expect(declined.status).toBe(402);
 		expect(await declined.text()).toContain('The card was declined');
@@ -425,12 +445,17 @@ describe('paying through Checkout and the webhook', () => {
 describe('refunds and cancelling', () => {
 	it('refunds a paid deposit through the SDK, once', async () => {
 		const id = await newDeposit('500.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		await payOnPage(url, '4242424242424242');
 		await fake.settled();
 		const paid = await deposit(id);
-		expect(await refundDeposit(coordinator, id, paid.version, null)).toMatchObject({ status: 403 });
-		const { refundId } = ok(await refundDeposit(finance, id, paid.version, context.ip), 'refund');
+		expect(await refundDeposit(coordinator, hallvik, id, paid.version, null)).toMatchObject({
+			status: 403
+		});
+		const { refundId } = ok(
+			await refundDeposit(finance, hallvik, id, paid.version, context.ip),
+			'refund'
+		);
 		expect(refundId).toMatch(/^re_/);
 		await fake.settled();
 		const d = await deposit(id);
@@ -439,7 +464,9 @@ describe('refunds and cancelling', () => {
 		expect(refund).toMatchObject({ amount: 50000, currency: 'eur', status: 'succeeded' });
 		expect(await events(id, 'refund.created')).toBe(1);
 		expect(await events(id, 'charge.refunded')).toBe(1);
-		expect(await refundDeposit(finance, id, d.version, null)).toMatchObject({ status: 409 });
+		expect(await refundDeposit(finance, hallvik, id, d.version, null)).toMatchObject({
+			status: 409
+		});
 		expect(await mails('deposit_refunded', id)).toEqual(['buyer@hallvik.example']);
 		expect(
 			await countRows('audit_events', "action = 'deposit.refund' AND entity_id = :id", { id })
@@ -448,14 +475,19 @@ describe('refunds and cancelling', () => {
 
 	it('cancels a requested deposit and closes its open session; a paid one cannot be cancelled', async () => {
 		const id = await newDeposit('40.00');
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout');
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout');
 		const d = await deposit(id);
-		ok(await cancelDeposit(coordinator, id, d.version, null), 'cancel');
+		ok(await cancelDeposit(coordinator, hallvik, id, d.version, null), 'cancel');
 		expect((await deposit(id)).state).toBe('cancelled');
 		const session = await createStripe(config).checkout.sessions.retrieve(sessionIdOf(url));
 		expect(session.status).toBe('expired');
-		expect(await startCheckout(buyer, id, ORIGIN)).toMatchObject({ ok: false, status: 409 });
-		expect(await cancelDeposit(coordinator, id, undefined, null)).toMatchObject({ status: 409 });
+		expect(await startCheckout(buyer, hallvik, id, ORIGIN)).toMatchObject({
+			ok: false,
+			status: 409
+		});
+		expect(await cancelDeposit(coordinator, hallvik, id, undefined, null)).toMatchObject({
+			status: 409
+		});
 	});
 
 	it('expires requested deposits past their due date', async () => {
@@ -466,6 +498,9 @@ describe('refunds and cancelling', () => {
 		);
 		expect(await expirePastDue()).toBeGreaterThanOrEqual(1);
 		expect((await deposit(id)).state).toBe('expired');
-		expect(await startCheckout(buyer, id, ORIGIN)).toMatchObject({ ok: false, status: 409 });
+		expect(await startCheckout(buyer, hallvik, id, ORIGIN)).toMatchObject({
+			ok: false,
+			status: 409
+		});
 	});
 });

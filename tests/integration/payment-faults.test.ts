@@ -94,14 +94,14 @@ describe('the payment provider stopped mid-run', () => {
 		const before = await deposit(id);
 
 		await stopFake();
-		const refused = await startCheckout(buyer, id, ORIGIN);
+		const refused = await startCheckout(buyer, hallvik, id, ORIGIN);
 		expect(refused).toMatchObject({ ok: false, status: 502 });
 		expect(refused.ok ? '' : refused.message).toMatch(/payment provider/);
 		expect(await deposit(id)).toEqual(before); // nothing half-done
 
 		await startFake();
-		const { url } = ok(await startCheckout(buyer, id, ORIGIN), 'checkout after restart');
-		expect(ok(await startCheckout(buyer, id, ORIGIN), 'again').url).toBe(url); // reused
+		const { url } = ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'checkout after restart');
+		expect(ok(await startCheckout(buyer, hallvik, id, ORIGIN), 'again').url).toBe(url); // reused
 		const paid = await fetch(url, {
 			method: 'POST',
 			redirect: 'manual',
@@ -118,14 +118,17 @@ describe('the payment provider stopped mid-run', () => {
 		// refund is made once, and a second click finds it refunded.
 		const paidDeposit = await deposit(id);
 		await stopFake();
-		const notYet = await refundDeposit(finance, id, paidDeposit.version, context.ip);
+		const notYet = await refundDeposit(finance, hallvik, id, paidDeposit.version, context.ip);
 		expect(notYet).toMatchObject({ ok: false, status: 502 });
 		expect((await deposit(id)).state).toBe('paid');
 
 		await startFake();
-		ok(await refundDeposit(finance, id, paidDeposit.version, context.ip), 'refund after restart');
+		ok(
+			await refundDeposit(finance, hallvik, id, paidDeposit.version, context.ip),
+			'refund after restart'
+		);
 		await fake!.settled();
-		const again = await refundDeposit(finance, id, undefined, context.ip);
+		const again = await refundDeposit(finance, hallvik, id, undefined, context.ip);
 		expect(again).toMatchObject({ ok: false, status: 409 });
 		expect((await deposit(id)).state).toBe('refunded');
 		const intent = sessions[0]!.payment_intent;

@@ -117,18 +117,24 @@ function scope(user: SessionUser): { sql: string; replacements: Record<string, s
 	return { sql: 'TRUE', replacements: {} };
 }
 
+/**
+ * The deposit a button names, on the shipment whose page the button is on: one of another
+ * shipment is not found, like one of another organization (no id works out of its place).
+ */
 async function findDeposit(
 	user: SessionUser,
+	shipmentId: string,
 	depositId: string,
 	options: { transaction?: Transaction; lock?: boolean } = {}
 ): Promise<DepositRow | null> {
 	const s = scope(user);
 	const [row] = await sequelize().query<DepositRow>(
-		`SELECT ${DEPOSIT_COLUMNS} ${FROM} WHERE d.id = :depositId AND ${s.sql}
+		`SELECT ${DEPOSIT_COLUMNS} ${FROM}
+		  WHERE d.id = :depositId AND d.shipment_id = :shipmentId AND ${s.sql}
 		 ${options.lock ? 'FOR UPDATE OF d' : ''}`,
 		{
 			type: QueryTypes.SELECT,
-			replacements: { depositId, ...s.replacements },
+			replacements: { depositId, shipmentId, ...s.replacements },
 			transaction: options.transaction
 		}
 	);
@@ -381,13 +387,14 @@ export async function expirePastDue(on = today()): Promise<number> {
 /** Finance or a coordinator withdraws a requested deposit that has no payment on it. */
 export async function cancelDeposit(
 	user: SessionUser,
+	shipmentId: string,
 	depositId: string,
 	version: number | undefined,
 	ip: string | null
 ): Promise<ServiceResult<{ id: string }>> {
 	if (!mayRequest(user)) return refused(403, 'Only finance and coordinators cancel deposits.');
 	const outcome = await sequelize().transaction(async (transaction) => {
-		const d = await findDeposit(user, depositId, { transaction, lock: true });
+		const d = await findDeposit(user, shipmentId, depositId, { transaction, lock: true });
 		if (!d) return refused(404, 'No deposit with this id is visible to you.');
 		if (version !== undefined && d.version !== version)
 			return refused(409, 'This deposit changed meanwhile. Reload and try again.');
@@ -430,12 +437,13 @@ function providerRefusal(e: unknown, doing: string) {
  */
 export async function startCheckout(
 	user: SessionUser,
+	shipmentId: string,
 	depositId: string,
 	origin: string
 ): Promise<ServiceResult<{ url: string }>> {
 	if (user.role !== 'customer') return refused(403, 'Only the customer pays a deposit.');
 	await expirePastDue();
-	const d = await findDeposit(user, depositId);
+	const d = await findDeposit(user, shipmentId, depositId);
 	if (!d) return refused(404, 'No deposit with this id is visible to you.');
 	if (!canPay(d, today())) {
 		if (d.state === 'requested' && (d.paymentIntentId || d.mismatchReason))
@@ -506,7 +514,7 @@ export async function startCheckout(
 		);
 		if (updated.length === 0) {
 			// A concurrent click stored its session first: send this customer to that one.
-			const again = await findDeposit(user, depositId);
+			const again = await findDeposit(user, shipmentId, depositId);
 			if (again?.checkoutUrl && again.state === 'requested')
 				return { ok: true, value: { url: again.checkoutUrl } };
 			return refused(409, 'This deposit changed meanwhile. Reload and try again.');
@@ -520,12 +528,13 @@ export async function startCheckout(
 /** Finance returns a paid deposit (or a flagged payment) to the customer through Stripe. */
 export async function refundDeposit(
 	user: SessionUser,
+	shipmentId: string,
 	depositId: string,
 	version: number | undefined,
 	ip: string | null
 ): Promise<ServiceResult<{ id: string; refundId: string }>> {
 	if (!mayRefund(user)) return refused(403, 'Only finance refunds deposits.');
-	const d = await findDeposit(user, depositId);
+	const d = await findDeposit(user, shipmentId, depositId);
 	if (!d) return refused(404, 'No deposit with this id is visible to you.');
 	if (version !== undefined && d.version !== version)
 		return refused(409, 'This deposit changed meanwhile. Reload and try again.');

@@ -410,7 +410,7 @@ export const actions: Actions = {
 		const user = requireRole(event, ...DEPOSIT_REQUESTERS);
 		return depositStep(
 			event,
-			(id, version, ip) => cancelDeposit(user, id, version, ip),
+			(id, version, ip) => cancelDeposit(user, event.params.shipmentId, id, version, ip),
 			() => 'Deposit cancelled.'
 		);
 	},
@@ -418,7 +418,7 @@ export const actions: Actions = {
 		const user = requireRole(event, 'finance');
 		return depositStep(
 			event,
-			(id, version, ip) => refundDeposit(user, id, version, ip),
+			(id, version, ip) => refundDeposit(user, event.params.shipmentId, id, version, ip),
 			(v) => `Refund ${v.refundId} made.`
 		);
 	},
@@ -426,7 +426,12 @@ export const actions: Actions = {
 		const user = requireRole(event, 'customer');
 		const target = await depositAction(event);
 		if (!target) return fail(400, NO_DEPOSIT);
-		const result = await startCheckout(user, target.depositId, event.url.origin);
+		const result = await startCheckout(
+			user,
+			event.params.shipmentId,
+			target.depositId,
+			event.url.origin
+		);
 		if (!result.ok) return fail(result.status, { depositError: result.message });
 		// The payment provider's hosted page; the webhook, not this redirect, decides the outcome.
 		redirect(303, result.value.url);
