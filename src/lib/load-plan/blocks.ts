@@ -42,6 +42,8 @@ export interface Block {
 	nz: number;
 	a: Block | null;
 	b: Block | null;
+	/** Identity for de-duplication and ties (`key()`), set when the block is kept. */
+	key: string;
 }
 
 export interface BlockLimits {
@@ -79,7 +81,8 @@ function simpleBlock(bt: CoreBoxType, t: number, o: number, nx: number, ny: numb
 		ny,
 		nz,
 		a: null,
-		b: null
+		b: null,
+		key: ''
 	};
 	return block;
 }
@@ -119,12 +122,25 @@ function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number)
 		if (spec[i + 2]! * spec[i + 3]! * spec[i + 4]! === 1) singles.push(i);
 		else rest.push(i);
 	}
-	const vol = (i: number) => spec[i + 2]! * spec[i + 3]! * spec[i + 4]! * types[spec[i]!]!.volume;
-	let top = 0;
-	for (const i of rest) top = Math.max(top, vol(i));
+	// The largest `keep` by box volume, in the order made among equal volumes (a stable sort):
+	// candidates share few distinct volumes, so they are bucketed by volume, not sorted.
+	const buckets = new Map<number, number[]>();
+	for (const i of rest) {
+		const v = spec[i + 2]! * spec[i + 3]! * spec[i + 4]! * types[spec[i]!]!.volume;
+		const bucket = buckets.get(v);
+		if (bucket) bucket.push(i);
+		else buckets.set(v, [i]);
+	}
 	const keep = Math.max(0, maxBlocks - singles.length);
-	const largest = sortedIndices(rest.length, (k) => top - vol(rest[k]!)).slice(0, keep);
-	return singles.map(made).concat(largest.map((k) => made(rest[k]!)));
+	const largest: number[] = [];
+	for (const v of [...buckets.keys()].sort((a, b) => b - a)) {
+		for (const i of buckets.get(v)!) {
+			if (largest.length === keep) break;
+			largest.push(i);
+		}
+		if (largest.length === keep) break;
+	}
+	return singles.map(made).concat(largest.map(made));
 }
 
 /** Merged sparse counts of a and b, or null when more than `count` of some type. */
@@ -214,7 +230,8 @@ function combine(
 		ny: 0,
 		nz: 0,
 		a,
-		b
+		b,
+		key: ''
 	};
 }
 
@@ -297,8 +314,22 @@ function largestFirst(blocks: readonly Block[]): Block[] {
 	return sortedBy(blocks, 0, blocks.length, (b) => top - b.vol).order.map((i) => blocks[i]!);
 }
 
+/** Characters of a key that keyHead packs: 16 values (end, ',', '.', digits, ':') per character. */
+const HEAD_CHARS = 13;
+
+/**
+ * The first HEAD_CHARS characters of a key as one number, in the keys' text order (a key that
+ * ends first is smaller, as in text): comparing these decides most ties without comparing text.
+ * Keys hold only digits, ',', '.' and ':' (see key()); 16^13 is below 2^53, so this is exact.
+ */
+function keyHead(key: string): number {
+	let h = 0;
+	for (let i = 0; i < HEAD_CHARS; i++) h = h * 16 + (i < key.length ? key.charCodeAt(i) - 43 : 0);
+	return h;
+}
+
 /** Orders blocks: larger box volume first, then fewer boxes, then by key (deterministic). */
-function sortBlocks(all: Block[], keys: Map<Block, string>): Block[] {
+function sortBlocks(all: Block[]): Block[] {
 	// By volume natively first; only runs of equal volume need the comparator (and the keys).
 	const byVol = largestFirst(all);
 	const out: Block[] = [];
@@ -307,12 +338,14 @@ function sortBlocks(all: Block[], keys: Map<Block, string>): Block[] {
 		while (j < byVol.length && byVol[j]!.vol === byVol[i]!.vol) j++;
 		if (j - i === 1) out.push(byVol[i]!);
 		else {
-			const rows = byVol.slice(i, j).map((b) => ({ b, boxes: b.boxes, key: keys.get(b)! }));
-			rows.sort((p, q) => {
-				if (p.boxes !== q.boxes) return p.boxes - q.boxes;
-				return p.key < q.key ? -1 : p.key > q.key ? 1 : 0;
-			});
-			for (const r of rows) out.push(r.b);
+			const run = byVol.slice(i, j).map((b) => ({ b, head: keyHead(b.key) }));
+			run.sort(
+				(p, q) =>
+					p.b.boxes - q.b.boxes ||
+					p.head - q.head ||
+					(p.b.key < q.b.key ? -1 : p.b.key > q.b.key ? 1 : 0)
+			);
+			for (const r of run) out.push(r.b);
 		}
 		i = j;
 	}
@@ -328,14 +361,13 @@ export function generateBlocks(
 	c: CoreContainer,
 	limits: BlockLimits
 ): Block[] {
-	const keys = new Map<Block, string>();
 	const seen = new Set<string>();
 	const all: Block[] = [];
 	const add = (b: Block): boolean => {
 		const k = key(b);
 		if (seen.has(k)) return false;
 		seen.add(k);
-		keys.set(b, k);
+		b.key = k;
 		all.push(b);
 		return true;
 	};
@@ -379,5 +411,5 @@ export function generateBlocks(
 		if (spent(limits)) break;
 		from = to;
 	}
-	return sortBlocks(all, keys);
+	return sortBlocks(all);
 }

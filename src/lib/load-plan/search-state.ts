@@ -49,17 +49,45 @@ function axisReach(problem: CoreProblem, avail: Int32Array, size: number, axis: 
 		if (avail[i]! <= 0) return;
 		for (const e of t.extents) lengths.add(axis === 0 ? e.dx : axis === 1 ? e.dy : e.dz);
 	});
-	const ok = new Uint8Array(size + 1);
+	// Which lengths 0..size are sums of these (each any number of times), as bits: bit g of word
+	// g >> 5. For one length l the sums are built word by word upwards, every word from bits l
+	// below it; those are final already when l ≥ 32 (one word), so a word takes all its bits at
+	// once. Shorter lengths (never in practice: box sides in mm) go bit by bit.
+	const words = (size >> 5) + 1;
+	const ok = new Uint32Array(words);
 	ok[0] = 1;
-	const ls = [...lengths];
-	// Forward from each reachable length: few are reachable (box sides share factors), so this
-	// visits far fewer cells than asking every length whether it can be reached.
-	for (let g = 0; g <= size; g++) {
-		if (!ok[g]) continue;
-		for (const l of ls) if (g + l <= size) ok[g + l] = 1;
+	const bit = (g: number) => (ok[g >> 5]! >>> (g & 31)) & 1;
+	for (const l of lengths) {
+		if (l <= 0 || l > size) continue;
+		if (l < 32) {
+			for (let g = l; g <= size; g++) if (bit(g - l)) ok[g >> 5]! |= 1 << (g & 31);
+			continue;
+		}
+		const q = l >> 5;
+		const r = l & 31;
+		for (let w = q; w < words; w++) {
+			// Bits w·32 − l … w·32 − l + 31: the top of word w − q − 1 and the bottom of word w − q.
+			const lo = ok[w - q]! << r;
+			const hi = r === 0 || w - q - 1 < 0 ? 0 : ok[w - q - 1]! >>> (32 - r);
+			ok[w] = ok[w]! | lo | hi;
+		}
 	}
+	// The largest reachable length ≤ g, for every g; a word with no bits set repeats the last.
 	const fill = new Int32Array(size + 1);
-	for (let g = 1; g <= size; g++) fill[g] = ok[g] ? g : fill[g - 1]!;
+	let last = 0;
+	for (let w = 0; w < words; w++) {
+		const v = ok[w]!;
+		const base = w << 5;
+		const end = Math.min(base + 32, size + 1);
+		if (v === 0) {
+			fill.fill(last, base, end);
+			continue;
+		}
+		for (let g = base; g < end; g++) {
+			if ((v >>> (g - base)) & 1) last = g;
+			fill[g] = last;
+		}
+	}
 	return fill;
 }
 

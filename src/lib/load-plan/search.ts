@@ -59,13 +59,24 @@ export interface BlockTable {
 }
 
 export function blockTable(list: readonly Block[]): BlockTable {
-	return {
+	// Plain loops: TypedArray.from with a map function goes through the iterator protocol and
+	// cost more than the rest of this fill's bookkeeping.
+	const n = list.length;
+	const t: BlockTable = {
 		list,
-		dx: Int32Array.from(list, (b) => b.dx),
-		dy: Int32Array.from(list, (b) => b.dy),
-		dz: Int32Array.from(list, (b) => b.dz),
-		vol: Float64Array.from(list, (b) => b.vol)
+		dx: new Int32Array(n),
+		dy: new Int32Array(n),
+		dz: new Int32Array(n),
+		vol: new Float64Array(n)
 	};
+	for (let i = 0; i < n; i++) {
+		const b = list[i]!;
+		t.dx[i] = b.dx;
+		t.dy[i] = b.dy;
+		t.dz[i] = b.dz;
+		t.vol[i] = b.vol;
+	}
+	return t;
 }
 
 /**

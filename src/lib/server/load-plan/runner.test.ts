@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TIME_BUDGET_MS, type LoadPlanInput, type LoadPlanProgress } from '../../load-plan';
 import { MAX_QUEUED_BUDGET_MS, runLoadPlan } from './runner';
+import { planOf } from './run-result';
 
 // 1 m cubes into a 2 × 1 × 1 m box: exactly two fit (arithmetic).
 const input: LoadPlanInput = {
@@ -36,8 +37,8 @@ describe('runLoadPlan (worker thread)', () => {
 		const outcome = await runLoadPlan(input, (p) => progress.push(p));
 		expect(outcome.ok).toBe(true);
 		if (!outcome.ok || !outcome.result.ok) throw new Error('no plan');
-		expect(outcome.result.plan.containers[0]!.pieces).toBe(2);
-		expect(outcome.result.plan.unplaced).toEqual([
+		expect(planOf(outcome.result).containers[0]!.pieces).toBe(2);
+		expect(planOf(outcome.result).unplaced).toEqual([
 			{ itemTypeId: 'cube', count: 1, reason: 'no space left in the container' }
 		]);
 		expect(progress.every((p) => p.total === 3)).toBe(true);
@@ -47,8 +48,8 @@ describe('runLoadPlan (worker thread)', () => {
 		const a = runLoadPlan(input);
 		const b = runLoadPlan({ ...input, options: { ...input.options, maxContainers: 2 } });
 		const [ra, rb] = await Promise.all([a, b]);
-		expect(ra.ok && ra.result.ok && ra.result.plan.containers.length).toBe(1);
-		expect(rb.ok && rb.result.ok && rb.result.plan.containers.length).toBe(2);
+		expect(ra.ok && ra.result.ok && planOf(ra.result).containers.length).toBe(1);
+		expect(rb.ok && rb.result.ok && planOf(rb.result).containers.length).toBe(2);
 	});
 
 	it('stops a worker that overruns its time with a plain message, and uses a new one next', async () => {
@@ -63,7 +64,7 @@ describe('runLoadPlan (worker thread)', () => {
 		expect(outcome).toMatchObject({ ok: false, code: 'timeout' });
 		if (!outcome.ok) expect(outcome.message).toMatch(/did not finish within/);
 		const next = await runLoadPlan(input);
-		expect(next.ok && next.result.ok && next.result.plan.containers[0]!.pieces).toBe(2);
+		expect(next.ok && next.result.ok && planOf(next.result).containers[0]!.pieces).toBe(2);
 	});
 
 	it('reports a worker that cannot start instead of throwing', async () => {

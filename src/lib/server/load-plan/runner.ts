@@ -11,18 +11,14 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import {
-	DEFAULT_TIME_BUDGET_MS,
-	type LoadPlanInput,
-	type LoadPlanProgress,
-	type LoadPlanResult
-} from '../../load-plan';
+import { DEFAULT_TIME_BUDGET_MS, type LoadPlanInput, type LoadPlanProgress } from '../../load-plan';
+import type { RunResult } from './run-result';
 
 /** Same as worker.ts's JOB_TAG (not imported: that would pull the worker into this chunk). */
 const JOB_TAG = 'landfall-load-plan';
 
 export type RunOutcome =
-	| { ok: true; result: LoadPlanResult }
+	| { ok: true; result: RunResult }
 	| { ok: false; code: 'busy' | 'timeout' | 'crashed'; message: string };
 
 /**

@@ -6,14 +6,14 @@
  */
 import { isMainThread, parentPort, workerData } from 'node:worker_threads';
 import { planLoad, type LoadPlanInput, type LoadPlanProgress } from '../../load-plan';
+import type { RunResult } from './run-result';
 
 export const WORKER_URL = import.meta.url;
 export const JOB_TAG = 'landfall-load-plan';
 
 export type WorkerJob = { type: 'job'; input: LoadPlanInput };
 export type WorkerMessage =
-	| { type: 'progress'; progress: LoadPlanProgress }
-	| { type: 'result'; result: ReturnType<typeof planLoad> };
+	{ type: 'progress'; progress: LoadPlanProgress } | { type: 'result'; result: RunResult };
 
 /** Progress at most this often: the planner may report many improvements per second. */
 const PROGRESS_EVERY_MS = 150;
@@ -33,6 +33,11 @@ if (!isMainThread && parentPort && workerData?.tag === JOB_TAG) {
 				}
 			}
 		});
-		port.postMessage({ type: 'result', result } satisfies WorkerMessage);
+		// The plan as JSON text: copying one string to the main thread is far cheaper than
+		// cloning the plan's objects, and the API sends that text as it is.
+		const sent: RunResult = result.ok
+			? { ok: true, problems: result.problems, planJson: JSON.stringify(result.plan) }
+			: result;
+		port.postMessage({ type: 'result', result: sent } satisfies WorkerMessage);
 	});
 }

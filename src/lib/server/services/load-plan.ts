@@ -19,6 +19,7 @@ import {
 import type { Problem } from '../../packing';
 import type { SessionUser } from '../auth/session-user';
 import { ContainerTypeRow, ShipmentLoadPlan } from '../db/models';
+import { planOf } from '../load-plan/run-result';
 import { runLoadPlan } from '../load-plan/runner';
 import { KeptResults } from './kept-results';
 import { keptShipmentMeasure, type ShipmentMeasure } from './shipment-measure';
@@ -158,7 +159,7 @@ async function compute(p: Prepared, listeners: Running['listeners']): Promise<Lo
 			outcome.result.problems
 		);
 	}
-	const plan = outcome.result.plan;
+	const plan = planOf(outcome.result);
 	const [row] = await ShipmentLoadPlan.upsert({
 		shipmentId: p.shipment.id,
 		shipmentVersion: p.shipment.version,

@@ -1,4 +1,4 @@
-import { error, json } from '@sveltejs/kit';
+import { error } from '@sveltejs/kit';
 import { validateLoadInput } from '$lib/load-plan';
 import { loadPlanInputSchema } from '$lib/schemas/load-plan';
 import { readJson } from '$lib/server/api';
@@ -27,5 +27,12 @@ export const POST: RequestHandler = async (event) => {
 			issues: outcome.result.problems
 		});
 	}
-	return json(outcome.result.plan);
+	// The worker's JSON text as it is (what json() would make of the parsed plan).
+	const body = outcome.result.planJson;
+	return new Response(body, {
+		headers: {
+			'content-type': 'application/json',
+			'content-length': String(Buffer.byteLength(body))
+		}
+	});
 };
