@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, gotoHydrated, signInPage } from './helpers';
 import {
 	POWER_BANK,
 	addLine,
@@ -80,7 +80,7 @@ test('papers for power banks by air wait for a UN38.3 summary, then issue', asyn
 		'UN38.3 test summary, Ridge 20000 pack, 2026'
 	);
 
-	await page.goto(shipment.url);
+	await gotoHydrated(page, shipment.url);
 	const ready = region(page, 'Customs papers');
 	await expect(ready.getByRole('list', { name: 'Missing before issue' })).toHaveCount(0);
 	await ready.getByRole('button', { name: 'Issue papers' }).click();
@@ -93,7 +93,7 @@ test('papers for power banks by air wait for a UN38.3 summary, then issue', asyn
 
 test('a file that is not a PDF, PNG or JPEG is refused with a field error', async ({ page }) => {
 	await signInPage(page, DEMO.coordinator);
-	await page.goto('/products');
+	await gotoHydrated(page, '/products');
 	await page
 		.getByRole('link', { name: /SLV-PWR-20K/ })
 		.first()

@@ -1,6 +1,14 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { DEMO, DEMO_PASSWORD, apiAs, caughtMail, linkIn, signInPage } from './helpers';
+import {
+	DEMO,
+	DEMO_PASSWORD,
+	apiAs,
+	caughtMail,
+	gotoHydrated,
+	linkIn,
+	signInPage
+} from './helpers';
 
 // Freight deposits with the local Stripe fake (started by playwright.config.ts): finance asks
 // Hallvik for a deposit; Hallvik's buyer pays on the fake's test payment page and comes back;
@@ -23,7 +31,7 @@ async function requestDeposit(browser: Browser, amount: string, note: string) {
 	const context = await browser.newContext();
 	const page = await context.newPage();
 	await signInPage(page, DEMO.finance);
-	await page.goto(`/shipments/${shipmentId}`);
+	await gotoHydrated(page, `/shipments/${shipmentId}`);
 	const panel = page.getByRole('region', { name: 'Freight deposits' });
 	await panel.getByLabel('A fixed amount').check();
 	await panel.getByLabel('Amount', { exact: true }).fill(amount);
@@ -36,7 +44,7 @@ async function requestDeposit(browser: Browser, amount: string, note: string) {
 
 /** The buyer's row of that deposit on the shipment page. */
 async function buyerRow(page: Page, note: string) {
-	await page.goto(`/shipments/${shipmentId}`);
+	await gotoHydrated(page, `/shipments/${shipmentId}`);
 	return page
 		.getByRole('table', { name: 'Freight deposits' })
 		.getByRole('row')
@@ -125,7 +133,7 @@ test('the deposit request arrives by e-mail; its link leads to payment, and the 
 	expect(payLink).toContain(`/shipments/${shipmentId}`);
 
 	// Following it signs the customer in first, then lands on the shipment.
-	await page.goto(payLink);
+	await gotoHydrated(page, payLink);
 	await expect(page).toHaveURL(/\/signin/);
 	await page.getByLabel('E-mail').fill(DEMO.customer);
 	await page.getByLabel('Password').fill(DEMO_PASSWORD);
@@ -150,7 +158,7 @@ test('the deposit request arrives by e-mail; its link leads to payment, and the 
 			/^Receipt: [A-Z]{3} 715\.00 /.test(m.subject) && m.text.includes(`/shipments/${shipmentId}/`)
 	);
 	expect(receipt.text).toMatch(/Payment reference: pi_\w+/);
-	await page.goto(linkIn(receipt, 'View the receipt'));
+	await gotoHydrated(page, linkIn(receipt, 'View the receipt'));
 	await expect(page.getByRole('heading', { name: 'Receipt' })).toBeVisible();
 	await expect(page.getByTestId('receipt-amount')).toHaveText(/^[A-Z]{3} 715\.00$/);
 	await expect(page.getByTestId('receipt-reference')).toHaveText(/^pi_/);

@@ -27,6 +27,12 @@ export async function signInPage(page: Page, email: string) {
 	await expect(page).toHaveURL((url) => !url.pathname.startsWith('/signin'));
 }
 
+/** Opens `path` and waits until Svelte has hydrated it (see src/routes/+layout.svelte). */
+export async function gotoHydrated(page: Page, path: string) {
+	await page.goto(path);
+	await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1);
+}
+
 /** An API client holding the session cookie of the given user (or none when email is null). */
 export async function apiAs(baseURL: string, email: string | null): Promise<APIRequestContext> {
 	const context = await request.newContext({ baseURL, extraHTTPHeaders: { origin: baseURL } });

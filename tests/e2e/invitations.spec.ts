@@ -1,13 +1,13 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test } from '@playwright/test';
-import { DEMO, caughtMail, linkIn, signInPage } from './helpers';
+import { DEMO, caughtMail, gotoHydrated, linkIn, signInPage } from './helpers';
 
 // An administrator invites a person by e-mail; the invitation is read from the local mail
 // catcher; its link sets the password once; the person then signs in with it.
 test('invitation → set password → sign in; the link works once', async ({ page, browser }) => {
 	const email = `invited.${Date.now()}@solvrae.example`;
 	await signInPage(page, DEMO.admin);
-	await page.goto('/admin/users');
+	await gotoHydrated(page, '/admin/users');
 	const form = page.getByRole('region', { name: 'Add a person' });
 	await form.getByLabel('Name').fill('Mei Ling Tan');
 	await form.getByLabel('E-mail').fill(email);
@@ -22,7 +22,7 @@ test('invitation → set password → sign in; the link works once', async ({ pa
 
 	const context = await browser.newContext();
 	const invitee = await context.newPage();
-	await invitee.goto(link);
+	await gotoHydrated(invitee, link);
 	await expect(invitee.getByRole('heading', { name: 'Choose a password' })).toBeVisible();
 	await expect(invitee.getByText(email)).toBeVisible();
 	// WCAG 2.1 A/AA through axe, as in accessibility.spec.ts: nothing serious or critical.
@@ -49,7 +49,7 @@ test('invitation → set password → sign in; the link works once', async ({ pa
 	await expect(invitee).toHaveURL((url) => !url.pathname.startsWith('/signin'));
 
 	// The same link a second time: refused, nothing to fill in.
-	await invitee.goto(link);
+	await gotoHydrated(invitee, link);
 	await expect(invitee.getByRole('alert')).toHaveText(/no longer valid/);
 	await context.close();
 });

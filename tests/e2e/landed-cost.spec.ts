@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, apiAs, signInPage } from './helpers';
+import { DEMO, apiAs, gotoHydrated, signInPage } from './helpers';
 
 // Finance compares the modes of the seeded Hallvik shipment (Port Klang → Hamburg: sea full
 // container, sea groupage, air) and reads how the figures were reached.
@@ -17,7 +17,7 @@ test('finance compares air and sea and sees the breakdown and the chart', async 
 	await api.dispose();
 
 	await signInPage(page, DEMO.finance);
-	await page.goto(`/shipments/${ship.id}`);
+	await gotoHydrated(page, `/shipments/${ship.id}`);
 	await page.getByRole('link', { name: 'Compare landed cost by mode' }).click();
 	const table = page.getByRole('table', { name: 'Landed cost by mode' });
 	// Full-container freight needs the load plan, which the first request computes.

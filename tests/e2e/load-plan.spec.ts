@@ -1,12 +1,12 @@
 import { expect, test, type Page } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, gotoHydrated, signInPage } from './helpers';
 
 // A coordinator computes a shipment's container load plan in the browser: progress, the figures,
 // the 3D, side and top views, the viewpoints and the loading sequence; the plan then comes from
 // the cache. The demo shipment for Cedarpoint is 240 power-bank and 20 battery-pack cartons.
 
 async function openCedarpointShipment(page: Page) {
-	await page.goto('/shipments?q=SHP-2026-00003'); // Cedarpoint's; other specs add shipments
+	await gotoHydrated(page, '/shipments?q=SHP-2026-00003'); // Cedarpoint's; other specs add shipments
 	await page
 		.getByRole('row', { name: /Cedarpoint/ })
 		.first()

@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { DEMO, apiAs, signInPage } from './helpers';
+import { DEMO, apiAs, gotoHydrated, signInPage } from './helpers';
 
 // The issue's "done when": a coordinator issues both papers of the booked Hallvik shipment in the
 // browser, the assigned broker downloads them (one PDF and the ZIP), and a reissue gives
@@ -33,7 +33,7 @@ async function download(page: Page, link: ReturnType<Page['getByRole']>) {
 test('a coordinator issues the commercial invoice and the packing list', async ({ page }) => {
 	test.setTimeout(60_000);
 	await signInPage(page, DEMO.coordinator);
-	await page.goto(shipmentUrl);
+	await gotoHydrated(page, shipmentUrl);
 	const panel = papers(page);
 	await expect(panel.getByText('No papers have been issued yet.')).toBeVisible();
 	await expect(panel.getByRole('list', { name: 'Missing before issue' })).toHaveCount(0);
@@ -62,7 +62,7 @@ test('a coordinator issues the commercial invoice and the packing list', async (
 test('a reissue after a step back is revision B, with its reason', async ({ page }) => {
 	test.setTimeout(60_000);
 	await signInPage(page, DEMO.coordinator);
-	await page.goto(shipmentUrl);
+	await gotoHydrated(page, shipmentUrl);
 	const status = page.getByRole('region', { name: 'Status' });
 	await status.getByLabel('Note (optional)').fill('Correct the seal number');
 	await status.getByRole('button', { name: 'Mark booked' }).click();
@@ -89,7 +89,7 @@ test('the assigned broker downloads one paper and the ZIP of the current ones', 
 	page
 }) => {
 	await signInPage(page, DEMO.broker);
-	await page.goto(shipmentUrl);
+	await gotoHydrated(page, shipmentUrl);
 	const panel = papers(page);
 	await expect(register(page).getByRole('row')).toHaveCount(4);
 	// Brokers download; they do not issue.

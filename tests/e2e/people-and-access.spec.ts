@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, gotoHydrated, signInPage } from './helpers';
 
 test('an administrator adds a person, fixes a field error, then disables them', async ({
 	page
@@ -43,7 +43,7 @@ test('an administrator adds a person, fixes a field error, then disables them', 
 
 test('the same e-mail in other letter case is refused', async ({ page }) => {
 	await signInPage(page, DEMO.admin);
-	await page.goto('/admin/users');
+	await gotoHydrated(page, '/admin/users');
 	const form = page.getByRole('region', { name: 'Add a person' });
 	await form.getByLabel('Name').fill('Duplicate Person');
 	await form.getByLabel('E-mail').fill('Coordinator@Solvrae.example');
@@ -60,7 +60,7 @@ test('an administrator issues an API token that works on the API only, then revo
 	baseURL
 }) => {
 	await signInPage(page, DEMO.admin);
-	await page.goto('/admin/users');
+	await gotoHydrated(page, '/admin/users');
 	await page.getByRole('link', { name: 'Daniel Tan Wei Jie' }).click();
 	const name = `ERP export ${Date.now()}`;
 	await page.getByLabel('Token name').fill(name);

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, gotoHydrated, signInPage } from './helpers';
 
 // Finance keeps the landed-cost reference data: a daily rate table imported from a CSV file,
 // previewed row by row, recorded all at once and listed with its source.
@@ -46,7 +46,7 @@ test('finance imports a small FX table and sees the rates listed', async ({ page
 
 test('a coordinator reads the rates but has no forms', async ({ page }) => {
 	await signInPage(page, DEMO.coordinator);
-	await page.goto('/reference/exchange-rates');
+	await gotoHydrated(page, '/reference/exchange-rates');
 	await expect(page.getByRole('heading', { name: 'Exchange rates', level: 1 })).toBeVisible();
 	await expect(page.getByRole('button', { name: 'Add rate' })).toHaveCount(0);
 });
@@ -55,7 +55,7 @@ test('finance adds a tariff row, edits its duty and ends its validity', async ({
 	test.setTimeout(60_000);
 	const prefix = `8504${String(Math.floor(Math.random() * 1e4)).padStart(4, '0')}`;
 	await signInPage(page, DEMO.finance);
-	await page.goto('/reference/tariffs');
+	await gotoHydrated(page, '/reference/tariffs');
 	const add = page.getByRole('region', { name: 'Add a tariff row' });
 	await add.getByLabel('Destination country').selectOption('AU');
 	await add.getByLabel('HS prefix').fill(prefix);
@@ -87,7 +87,7 @@ test('finance adds a tariff row, edits its duty and ends its validity', async ({
 	await retire.getByRole('button', { name: 'Retire from that day' }).click();
 	await expect(retire.getByRole('status')).toHaveText('Valid until 2026-12-31.');
 
-	await page.goto(`/reference/tariffs?destination=AU`);
+	await gotoHydrated(page, `/reference/tariffs?destination=AU`);
 	const row = page.getByRole('row', { name: new RegExp(prefix) });
 	await expect(row).toContainText('2.5 %');
 	await expect(row).toContainText('2026-01-01 – 2026-12-31');

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, apiAs, signInPage } from './helpers';
+import { DEMO, apiAs, gotoHydrated, signInPage } from './helpers';
 
 // Finance keeps the rate cards and the country rules: a card added with its mode's fields, then
 // edited (a surcharge added); a customs fee added and edited. A coordinator reads but may not
@@ -14,7 +14,7 @@ test('finance adds a road rate card and edits it', async ({ page }) => {
 	test.setTimeout(60_000);
 	const to = `TH${letters()}`;
 	await signInPage(page, DEMO.finance);
-	await page.goto('/reference/rate-cards');
+	await gotoHydrated(page, '/reference/rate-cards');
 	await expect(page.getByRole('heading', { name: 'Rate cards', level: 1 })).toBeVisible();
 	await expect(page.getByRole('complementary', { name: 'Caution' })).toContainText(
 		'Estimates only'
@@ -52,7 +52,7 @@ test('finance adds a road rate card and edits it', async ({ page }) => {
 	await page.reload();
 	await expect(edit.getByLabel('Rate', { exact: true })).toHaveValue('0.45');
 	await expect(fuel.getByLabel('Charge', { exact: true })).toHaveValue('Fuel surcharge');
-	await page.goto(`/reference/rate-cards?lane=MYPEN-${to}`);
+	await gotoHydrated(page, `/reference/rate-cards?lane=MYPEN-${to}`);
 	const row = page.getByRole('row', { name: new RegExp(`MYPEN → ${to}`) });
 	await expect(row).toContainText('0.45 per kg (min 60)');
 	await expect(row).toContainText('+ 1 charge');
@@ -62,7 +62,7 @@ test('finance adds a customs fee for a country and edits it', async ({ page }) =
 	test.setTimeout(60_000);
 	const code = `US-E2E${letters()}`;
 	await signInPage(page, DEMO.finance);
-	await page.goto('/reference/country-rules?country=US');
+	await gotoHydrated(page, '/reference/country-rules?country=US');
 	await expect(page.getByText('WTO Customs Valuation Agreement, Art. 8.2').first()).toBeVisible();
 
 	const add = page.getByRole('region', { name: 'Add a customs fee' });
@@ -83,7 +83,7 @@ test('finance adds a customs fee for a country and edits it', async ({ page }) =
 	await edit.getByRole('button', { name: 'Save customs fee' }).click();
 	await expect(edit.getByRole('status')).toHaveText('Customs fee saved.');
 
-	await page.goto('/reference/country-rules?country=US');
+	await gotoHydrated(page, '/reference/country-rules?country=US');
 	const fees = page.getByRole('region', { name: 'Customs fees' });
 	await expect(fees.getByRole('row', { name: new RegExp(code) })).toContainText(
 		'13.75 fixed · Sea, full container'
@@ -95,12 +95,12 @@ test('a coordinator reads the rate cards and country rules but is refused change
 	baseURL
 }) => {
 	await signInPage(page, DEMO.coordinator);
-	await page.goto('/reference/rate-cards');
+	await gotoHydrated(page, '/reference/rate-cards');
 	await expect(page.getByRole('heading', { name: 'Rate cards', level: 1 })).toBeVisible();
 	await expect(page.getByRole('button', { name: 'Add rate card' })).toHaveCount(0);
-	await page.goto('/reference/country-rules');
+	await gotoHydrated(page, '/reference/country-rules');
 	await expect(page.getByRole('button', { name: 'Add customs fee' })).toHaveCount(0);
-	await page.goto('/reference/settings');
+	await gotoHydrated(page, '/reference/settings');
 	await expect(page.getByRole('button', { name: 'Save settings' })).toHaveCount(0);
 
 	const coordinator = await apiAs(baseURL!, DEMO.coordinator);

@@ -1,5 +1,5 @@
 import { expect, test, type Browser } from '@playwright/test';
-import { DEMO, signInPage } from './helpers';
+import { DEMO, gotoHydrated, signInPage } from './helpers';
 import {
 	COORDINATOR_NAME,
 	HUB,
@@ -53,7 +53,7 @@ test.describe('booking one shipment from draft to booked', () => {
 	});
 
 	test('a typed line is measured live, then saved', async ({ page }) => {
-		await page.goto(shipment.url);
+		await gotoHydrated(page, shipment.url);
 		const measures = measuresRegion(page);
 		await expect(measures.getByText('Add lines to see the cartons and weights.')).toBeVisible();
 
@@ -91,7 +91,7 @@ test.describe('booking one shipment from draft to booked', () => {
 	});
 
 	test('lines from a CSV file are previewed, added, then saved', async ({ page }) => {
-		await page.goto(shipment.url);
+		await gotoHydrated(page, shipment.url);
 		const lines = linesRegion(page);
 		await expect(lines.getByLabel('Quantity of line 1')).toHaveValue('250');
 
@@ -140,7 +140,7 @@ test.describe('booking one shipment from draft to booked', () => {
 	test('booking needs a chosen mode; with one it is booked by the coordinator', async ({
 		page
 	}) => {
-		await page.goto(shipment.url);
+		await gotoHydrated(page, shipment.url);
 		const status = statusRegion(page);
 		await status.getByRole('button', { name: 'Mark booked' }).click();
 		await expect(status.getByRole('alert')).toContainText('the chosen mode');
@@ -173,7 +173,7 @@ test.describe('booking one shipment from draft to booked', () => {
 	test('a container number with a wrong check digit is refused; a right one is listed', async ({
 		page
 	}) => {
-		await page.goto(shipment.url);
+		await gotoHydrated(page, shipment.url);
 		const containers = containersRegion(page);
 		await expect(containers.getByText('None recorded.')).toBeVisible();
 		const number = containers.getByLabel('Container number (ISO 6346)');
@@ -201,7 +201,7 @@ test.describe('booking one shipment from draft to booked', () => {
 	});
 
 	test('the list filters by status and sorts by reference', async ({ page }) => {
-		await page.goto('/shipments');
+		await gotoHydrated(page, '/shipments');
 		await page.getByLabel('Status').selectOption({ label: 'Booked' });
 		await page.getByRole('button', { name: 'Filter' }).click();
 		await expect(page).toHaveURL(/[?&]status=booked(&|$)/);
@@ -284,7 +284,7 @@ test('two editors: the second save of the same shipment is refused, not written'
 	const b = await signedInPage(browser);
 	try {
 		const { url } = await createDraftShipment(a.page);
-		await b.page.goto(url);
+		await gotoHydrated(b.page, url);
 		await expect(linesRegion(b.page).getByText('No lines yet.')).toBeVisible();
 
 		await addLine(a.page, 1, PEBBLE, '24');

@@ -1,4 +1,5 @@
 import { expect, type Page } from '@playwright/test';
+import { gotoHydrated } from './helpers';
 
 // Steps shared by the shipment specs: the demo catalogue's products, the page's regions, and
 // creating a draft, adding and saving lines as a coordinator does (seeders/demo-catalogue.ts).
@@ -29,7 +30,7 @@ export async function productValue(page: Page, line: number, label: string) {
 
 /** Fills the new-shipment form as the brief's booking and submits it; returns the page's URL. */
 export async function createDraftShipment(page: Page): Promise<{ url: string; reference: string }> {
-	await page.goto('/shipments');
+	await gotoHydrated(page, '/shipments');
 	await page.getByRole('link', { name: 'New shipment' }).click();
 	await expect(page.getByRole('heading', { level: 1, name: 'New shipment' })).toBeVisible();
 

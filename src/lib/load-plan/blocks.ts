@@ -87,13 +87,12 @@ function simpleBlock(bt: CoreBoxType, t: number, o: number, nx: number, ny: numb
 	return block;
 }
 
-/**
- * Every nx × ny × nz block of each type and orientation that fits; over `maxBlocks`, every single
- * box and then the largest (by box volume, in the order made). Candidates are listed as numbers
- * first, and only the kept ones become blocks: there are often many times more than are kept.
- */
-function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number): Block[] {
-	const spec: number[] = []; // t, o, nx, ny, nz per candidate
+/** Calls `visit` for every nx × ny × nz block of each type and orientation that fits, in one order. */
+function eachSimple(
+	types: CoreBoxType[],
+	c: CoreContainer,
+	visit: (t: number, o: number, nx: number, ny: number, nz: number) => void
+): void {
 	types.forEach((bt, t) => {
 		bt.extents.forEach((e, o) => {
 			const maxX = Math.min(Math.floor(c.L / e.dx), bt.count);
@@ -105,42 +104,78 @@ function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number)
 			}
 			for (let nz = 1; nz <= maxZ; nz++) {
 				for (let ny = 1; ny <= maxY && ny * nz <= bt.count; ny++) {
-					for (let nx = 1; nx <= maxX && nx * ny * nz <= bt.count; nx++) {
-						spec.push(t, o, nx, ny, nz);
-					}
+					for (let nx = 1; nx <= maxX && nx * ny * nz <= bt.count; nx++) visit(t, o, nx, ny, nz);
 				}
 			}
 		});
 	});
-	const made = (i: number) =>
-		simpleBlock(types[spec[i]!]!, spec[i]!, spec[i + 1]!, spec[i + 2]!, spec[i + 3]!, spec[i + 4]!);
-	const count = spec.length / 5;
-	if (count <= maxBlocks) return Array.from({ length: count }, (_, k) => made(5 * k));
-	const singles: number[] = [];
-	const rest: number[] = [];
-	for (let i = 0; i < spec.length; i += 5) {
-		if (spec[i + 2]! * spec[i + 3]! * spec[i + 4]! === 1) singles.push(i);
-		else rest.push(i);
+}
+
+/**
+ * Every simple block that fits; over `maxBlocks`, every single box and then the largest (by box
+ * volume, in the order made among equal volumes). A first pass only counts the candidates per type
+ * and box count (there are often many times more than are kept), which gives the smallest volume
+ * kept; the second makes only the blocks kept.
+ */
+function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number): Block[] {
+	const perCount = types.map((bt) => new Int32Array(bt.count + 1));
+	let total = 0;
+	eachSimple(types, c, (t, _o, nx, ny, nz) => {
+		perCount[t]![nx * ny * nz]!++;
+		total++;
+	});
+	const make = (t: number, o: number, nx: number, ny: number, nz: number) =>
+		simpleBlock(types[t]!, t, o, nx, ny, nz);
+	if (total <= maxBlocks) {
+		const all: Block[] = [];
+		eachSimple(types, c, (t, o, nx, ny, nz) => all.push(make(t, o, nx, ny, nz)));
+		return all;
 	}
-	// The largest `keep` by box volume, in the order made among equal volumes (a stable sort):
-	// candidates share few distinct volumes, so they are bucketed by volume, not sorted.
-	const buckets = new Map<number, number[]>();
-	for (const i of rest) {
-		const v = spec[i + 2]! * spec[i + 3]! * spec[i + 4]! * types[spec[i]!]!.volume;
-		const bucket = buckets.get(v);
-		if (bucket) bucket.push(i);
-		else buckets.set(v, [i]);
-	}
-	const keep = Math.max(0, maxBlocks - singles.length);
-	const largest: number[] = [];
-	for (const v of [...buckets.keys()].sort((a, b) => b - a)) {
-		for (const i of buckets.get(v)!) {
-			if (largest.length === keep) break;
-			largest.push(i);
+	const singles = perCount.reduce((sum, counts) => sum + counts[1]!, 0);
+	const keep = Math.max(0, maxBlocks - singles);
+	// Candidates per volume (types may share one), largest first: the threshold is the volume
+	// where the running count reaches `keep`; of that volume only the first `quota` are kept.
+	const byVolume = new Map<number, number>();
+	perCount.forEach((counts, t) => {
+		for (let n = 2; n < counts.length; n++) {
+			if (counts[n]! === 0) continue;
+			const v = n * types[t]!.volume;
+			byVolume.set(v, (byVolume.get(v) ?? 0) + counts[n]!);
 		}
-		if (largest.length === keep) break;
+	});
+	const volumes = [...byVolume.keys()].sort((a, b) => b - a);
+	let threshold = Infinity;
+	let quota = 0;
+	let taken = 0;
+	for (const v of volumes) {
+		if (taken >= keep) break;
+		const here = byVolume.get(v)!;
+		threshold = v;
+		quota = Math.min(here, keep - taken);
+		taken += here;
 	}
-	return singles.map(made).concat(largest.map(made));
+	const single: Block[] = [];
+	const buckets = new Map<number, Block[]>(volumes.map((v) => [v, []]));
+	eachSimple(types, c, (t, o, nx, ny, nz) => {
+		const n = nx * ny * nz;
+		if (n === 1) {
+			single.push(make(t, o, nx, ny, nz));
+			return;
+		}
+		const v = n * types[t]!.volume;
+		if (v < threshold) return;
+		if (v === threshold) {
+			if (quota === 0) return;
+			quota--;
+		}
+		buckets.get(v)!.push(make(t, o, nx, ny, nz));
+	});
+	const out = single;
+	for (const v of volumes) {
+		if (v < threshold) break;
+		for (const b of buckets.get(v)!) out.push(b);
+	}
+	return out;
 }
 
 /** Merged sparse counts of a and b, or null when more than `count` of some type. */
