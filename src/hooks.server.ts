@@ -13,6 +13,7 @@ import { extraPolicy } from '$lib/server/content-security';
 import { building } from '$app/environment';
 import { db } from '$lib/server/db';
 import { isDatabaseOutage, OUTAGE_MESSAGE, RETRY_AFTER_SECONDS } from '$lib/server/db/outage';
+import { outagePage } from '$lib/server/db/outage-page';
 import { startMailDispatcher, stopMailDispatcher } from '$lib/server/mail';
 import { userForToken } from '$lib/server/services/api-tokens';
 
@@ -113,8 +114,8 @@ function outageResponse(event: Parameters<Handle>[0]['event']): Response {
 			{ message: OUTAGE_MESSAGE, code: 'database_unavailable' },
 			{ status: 503, headers }
 		);
-	const page = `<!doctype html><html lang="en"><meta charset="utf-8"><title>Landfall: try again shortly</title><body style="font-family:sans-serif;margin:3rem"><h1>Try again in a moment</h1><p>${OUTAGE_MESSAGE}</p></body></html>`;
-	return new Response(page, {
+	const retry = `${event.url.pathname}${event.url.search}`;
+	return new Response(outagePage(OUTAGE_MESSAGE, RETRY_AFTER_SECONDS, retry), {
 		status: 503,
 		headers: { ...headers, 'content-type': 'text/html; charset=utf-8' }
 	});

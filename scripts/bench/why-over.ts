@@ -14,14 +14,13 @@ export const WHY_OVER: Record<string, string> = {
 		'slowest approach 1 s when other work shares the cores. The hash cost is the protection ' +
 		'against password guessing and is not lowered; a person signs in once per 8-hour session.',
 	'calc-load-plan':
-		'CPU-bound in the planner. Each request is a fresh search (nothing is kept): about 5.5 ms of ' +
-		'one core in process for these 240 cartons, plus the request thread’s share. Two planner ' +
-		'lanes run at once on 2 cores (the second only takes searches of 500 ms or less, so long ' +
-		'searches never hold both cores), which with autocannon and the request thread saturates the ' +
-		'machine near 200 requests/s: 20 requests at once queue, p95 ≈ 20 ÷ the rate. Profiled ' +
-		'(December 2026): block generation about half of the worker’s time, gap tables and the ' +
-		'beam search most of the rest. A stored shipment’s plan is read from its kept copy (the GET ' +
-		'above). ' +
+		'CPU-bound in the planner. Each request is a fresh search (nothing is kept): about 3 ms of ' +
+		'one core in process for these 240 cartons, plus about 2 ms of the request thread’s (the ' +
+		'session user’s query, the copy to and from the worker, writing 28 kB). Two planner lanes run ' +
+		'at once on 2 cores (the second only takes searches of 500 ms or less, so long searches never ' +
+		'hold both cores); with autocannon and PostgreSQL the machine is saturated near 320 ' +
+		'requests/s when idle: 20 requests at once queue, p95 ≈ 1.25 × 20 ÷ the rate, about 80 ms. ' +
+		'A stored shipment’s plan is read from its kept copy (the GET above). ' +
 		SHARED,
 	'list-page':
 		'CPU-bound: about 2.4 ms of the app’s CPU per page (server rendering, the CSP hash of the ' +
