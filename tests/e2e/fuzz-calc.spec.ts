@@ -6,19 +6,14 @@ import { DatabaseFingerprint, changedTables } from './db-fingerprint';
 import { MEASURE_BASE } from './fuzz-fixtures';
 import { judgeApi } from './fuzz-verdicts';
 import { DEMO, apiAs } from './helpers';
+import { ONLY, RUNS, SEED } from './fuzz-settings';
+import { leafPaths, setPath, type Json } from './fuzz-json-paths';
 
 // The stateless calc routes fuzzed from known-valid bodies, one leaf path at a time, so the
 // hostile value reaches the deep checks instead of the schema's first refusal (issue 9). Same
 // seed conventions as fuzz.spec.ts (FUZZ_SEED, FUZZ_RUNS, FUZZ_ONLY). Asserts: never a 5xx; a
 // 400 invalid_body names the mutated path, a prefix of it or a field below it; a 200 is a
 // result; these routes store nothing, so the database is unchanged after the whole run.
-
-const SEED = Number(process.env.FUZZ_SEED ?? 20261204);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
-const ONLY = process.env.FUZZ_ONLY ?? '';
-
-type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
-type Path = (string | number)[];
 
 /** A small load-plan body: a few dozen cartons, a short budget, so each case stays fast. */
 function loadPlanBase(): Json {
@@ -49,32 +44,6 @@ const ROUTES: { path: string; base: () => Json; ok: (body: unknown) => boolean }
 		ok: (b) => typeof b === 'object' && b !== null
 	}
 ];
-
-/** Every leaf path of a JSON value (arrays and objects are walked; empty ones count as leaves). */
-function leafPaths(value: Json, prefix: Path = []): Path[] {
-	if (Array.isArray(value)) {
-		if (value.length === 0) return [prefix];
-		return value.flatMap((v, i) => leafPaths(v, [...prefix, i]));
-	}
-	if (value !== null && typeof value === 'object') {
-		const keys = Object.keys(value);
-		if (keys.length === 0) return [prefix];
-		return keys.flatMap((k) => leafPaths(value[k]!, [...prefix, k]));
-	}
-	return [prefix];
-}
-
-function setPath(value: Json, path: Path, leaf: Json | undefined): Json {
-	const copy = structuredClone(value);
-	let node = copy as Record<string | number, Json>;
-	for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, Json>;
-	const last = path[path.length - 1]!;
-	if (leaf === undefined) {
-		if (Array.isArray(node)) node.splice(Number(last), 1);
-		else delete node[last];
-	} else node[last] = leaf;
-	return copy;
-}
 
 /** Hostile values for one field: wrong types, signs, sizes, precision, codes, emptiness. */
 const hostile: fc.Arbitrary<Json | undefined> = fc.oneof(

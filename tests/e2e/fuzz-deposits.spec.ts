@@ -5,6 +5,7 @@ import { DatabaseFingerprint, changedTables } from './db-fingerprint';
 import { judgeAction } from './fuzz-verdicts';
 import { hostileText } from './fuzz-values';
 import { DEMO, apiAs } from './helpers';
+import { ONLY, RUNS, SEED } from './fuzz-settings';
 
 // The deposit actions fuzzed around a real deposit (issue 9): fuzz.spec.ts only has made-up ids
 // for them, so its cases stop at "that deposit could not be identified". Here each case takes a
@@ -14,10 +15,6 @@ import { DEMO, apiAs } from './helpers';
 // an accepted case changes only the deposit's own tables (a cancel with its version dropped is
 // still a cancel: the version is optional), and then a fresh deposit is requested for the next.
 // FUZZ_SEED / FUZZ_RUNS / FUZZ_ONLY as in fuzz.spec.ts.
-
-const SEED = Number(process.env.FUZZ_SEED ?? 20261204);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
-const ONLY = process.env.FUZZ_ONLY ?? '';
 
 type Who = 'coordinator' | 'finance' | 'customer';
 const ACTIONS: { name: string; who: Who }[] = [

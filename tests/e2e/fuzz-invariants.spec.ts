@@ -4,6 +4,7 @@ import fc from 'fast-check';
 import { calcLoadPlanBody } from '../../scripts/bench/load-plan-input';
 import type { Placement } from '../../src/lib/load-plan/types';
 import { DEMO, apiAs } from './helpers';
+import { ONLY, RUNS, SEED } from './fuzz-settings';
 
 // Valid but varied bodies for the stateless calc routes (issue 9): fast-check makes products,
 // cartons, lines and loads a coordinator could send, and each answer is checked against figures
@@ -19,10 +20,6 @@ import { DEMO, apiAs } from './helpers';
 // - load plan: every carton is placed once or listed as unplaced, inside the container, with no
 //   two overlapping, and the payload and volume are the sums of what was placed.
 // FUZZ_SEED / FUZZ_RUNS / FUZZ_ONLY as in fuzz.spec.ts.
-
-const SEED = Number(process.env.FUZZ_SEED ?? 20261204);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
-const ONLY = process.env.FUZZ_ONLY ?? '';
 
 const kg = (min: number, max: number) =>
 	fc.integer({ min: min * 1000, max: max * 1000 }).map((g) => new Decimal(g).div(1000));

@@ -34,6 +34,7 @@ import {
 	type Who
 } from './route-probes';
 import { findForms, pageForms, parseActionResult } from './superform-data';
+import { ONLY, RUNS, SEED } from './fuzz-settings';
 
 // Hostile input to every mutating probe of route-probes.ts (form actions and API) and to every
 // query a GET reads, as a role that gets past the role check, so the validation is what is
@@ -43,10 +44,6 @@ import { findForms, pageForms, parseActionResult } from './superform-data';
 //
 // This file runs in the Playwright project "fuzz", after all other specs and alone (see
 // playwright.config.ts), because the fingerprint covers every table.
-
-const SEED = Number(process.env.FUZZ_SEED ?? 20261204);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
-const ONLY = process.env.FUZZ_ONLY ?? '';
 
 type Kind = 'action' | 'api' | 'query' | 'page-query';
 type Target = Probe & { id: string; kind: Kind };

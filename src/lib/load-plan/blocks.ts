@@ -154,12 +154,13 @@ function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number)
 		quota = Math.min(here, keep - taken);
 		taken += here;
 	}
-	const single: Block[] = [];
+	// Single boxes first, in the order made; then the kept larger blocks, largest volume first.
+	const out: Block[] = [];
 	const buckets = new Map<number, Block[]>(volumes.map((v) => [v, []]));
 	eachSimple(types, c, (t, o, nx, ny, nz) => {
 		const n = nx * ny * nz;
 		if (n === 1) {
-			single.push(make(t, o, nx, ny, nz));
+			out.push(make(t, o, nx, ny, nz));
 			return;
 		}
 		const v = n * types[t]!.volume;
@@ -170,7 +171,6 @@ function simpleBlocks(types: CoreBoxType[], c: CoreContainer, maxBlocks: number)
 		}
 		buckets.get(v)!.push(make(t, o, nx, ny, nz));
 	});
-	const out = single;
 	for (const v of volumes) {
 		if (v < threshold) break;
 		for (const b of buckets.get(v)!) out.push(b);
